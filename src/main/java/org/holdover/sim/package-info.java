@@ -1,0 +1,4 @@
+/**
+ * The hourly energy balance over a year and its metrics.
+ */
+package org.holdover.sim;
