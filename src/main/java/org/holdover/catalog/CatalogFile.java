@@ -1,0 +1,86 @@
+package org.holdover.catalog;
+
+import java.util.List;
+
+/**
+ * A catalog file as written (YAML or JSON). Optional fields are boxed and may be null; {@link CatalogReader}
+ * checks every value and reports problems with their locations.
+ *
+ * @param name           the catalog's name
+ * @param demoData       true for invented demonstration data
+ * @param note           a note shown in the workbook
+ * @param inverters      inverters
+ * @param batteryModules battery modules
+ */
+public record CatalogFile(String name, Boolean demoData, String note, List<InverterEntry> inverters,
+                          List<ModuleEntry> batteryModules) {
+
+    /**
+     * @param id                 identifier, unique in the catalog
+     * @param description        plain description
+     * @param busClassV          nominal DC bus class, V
+     * @param dcWindowV          DC input window, V (min is the low-voltage cutoff)
+     * @param ac                 AC output
+     * @param continuousW        continuous output at 25 °C, W
+     * @param continuousVa       continuous output at 25 °C, VA (default: continuousW)
+     * @param perLegVa           per-leg continuous VA (split phase only)
+     * @param surge              short-time ratings (at most 3)
+     * @param derating           temperature derating of the continuous rating
+     * @param efficiency         efficiency points
+     * @param noLoadW            no-load draw, W
+     * @param topology           transformer, transformerless-boost or transformerless-direct
+     * @param maxModulationIndex highest modulation index (transformerless-direct), default 0.95
+     * @param price              demo price
+     */
+    public record InverterEntry(String id, String description, Double busClassV, WindowEntry dcWindowV, AcEntry ac,
+                                Double continuousW, Double continuousVa, Double perLegVa, List<SurgeEntry> surge,
+                                DeratingEntry derating, List<EfficiencyEntry> efficiency, Double noLoadW,
+                                String topology, Double maxModulationIndex, Double price) {
+    }
+
+    /** @param min lowest, V; @param max highest, V */
+    public record WindowEntry(Double min, Double max) {
+    }
+
+    /**
+     * @param voltsRms      line-to-line RMS voltage, V
+     * @param frequenciesHz frequencies it can be set to, Hz
+     * @param splitPhase    120/240 V split-phase output
+     */
+    public record AcEntry(Double voltsRms, List<Double> frequenciesHz, Boolean splitPhase) {
+    }
+
+    /** @param seconds duration, s; @param va apparent power, VA */
+    public record SurgeEntry(Double seconds, Double va) {
+    }
+
+    /** @param startC ambient where derating starts, °C; @param pctPerC % of rating lost per °C above it */
+    public record DeratingEntry(Double startC, Double pctPerC) {
+    }
+
+    /** @param loadPct output, % of rated; @param pct efficiency, % */
+    public record EfficiencyEntry(Double loadPct, Double pct) {
+    }
+
+    /**
+     * @param id                    identifier, unique in the catalog
+     * @param description           plain description
+     * @param chemistry             lifepo4, agm, gel or flooded
+     * @param nominalV              nominal voltage, V
+     * @param capacityAh            rated capacity, Ah
+     * @param rateHours             discharge time of the rating, h
+     * @param internalResistanceMilliohm internal resistance at 25 °C, mΩ
+     * @param maxContinuousA        continuous discharge limit, A
+     * @param maxSurgeA             short-time discharge limit, A
+     * @param surgeSeconds          how long the short-time limit may last, s
+     * @param maxChargeA            charge current limit, A
+     * @param maxParallel           most parallel strings its management system allows
+     * @param maxSeries             most modules in series it allows (default: no limit for lead-acid, 1 otherwise)
+     * @param price                 demo price
+     */
+    public record ModuleEntry(String id, String description, String chemistry, Double nominalV, Double capacityAh,
+                              Double rateHours, Double internalResistanceMilliohm, Double maxContinuousA,
+                              Double maxSurgeA, Double surgeSeconds, Double maxChargeA, Integer maxParallel,
+                              Integer maxSeries, Double price) {
+    }
+}

@@ -1,0 +1,363 @@
+package org.holdover.catalog;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import java.util.function.Function;
+import org.holdover.battery.BatteryModule;
+import org.holdover.battery.Chemistry;
+import org.holdover.catalog.CatalogFile.EfficiencyEntry;
+import org.holdover.catalog.CatalogFile.InverterEntry;
+import org.holdover.catalog.CatalogFile.ModuleEntry;
+import org.holdover.catalog.CatalogFile.SurgeEntry;
+import org.holdover.inverter.AcOutput;
+import org.holdover.inverter.EfficiencyPoint;
+import org.holdover.inverter.InverterSpec;
+import org.holdover.inverter.LossModel;
+import org.holdover.inverter.SurgeRating;
+import org.holdover.project.InputException;
+import org.holdover.project.Problem;
+import org.holdover.project.SourceLocation;
+import org.holdover.project.StructuredFile;
+
+/** Reads and validates catalogs: the built-in demo catalog and user catalog files. */
+public final class CatalogReader {
+
+    /** Name of the built-in catalog resource. */
+    public static final String BUILTIN_RESOURCE = "demo-catalog.yaml";
+    /** Display name of the built-in catalog. */
+    public static final String BUILTIN_DISPLAY = "<built-in demo catalog>";
+    /** Most surge ratings per inverter (the workbook has three slots). */
+    public static final int MAX_SURGE_RATINGS = 3;
+
+    private final Function<String, SourceLocation> locator;
+    private final List<Problem> problems = new ArrayList<>();
+
+    private CatalogReader(Function<String, SourceLocation> locator) {
+        this.locator = locator;
+    }
+
+    /** The built-in demo catalog. */
+    public static Catalog builtin() {
+        try (InputStream in = CatalogReader.class.getResourceAsStream(BUILTIN_RESOURCE)) {
+            String text = new String(in.readAllBytes(), StandardCharsets.UTF_8);
+            return parse(text, BUILTIN_DISPLAY, false);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        } catch (InputException e) {
+            throw new IllegalStateException("the built-in catalog is invalid: " + e.getMessage(), e);
+        }
+    }
+
+    /** Reads a user catalog file. */
+    public static Catalog read(Path file, String display) throws InputException {
+        StructuredFile.Parsed<CatalogFile> parsed = StructuredFile.read(file, display, CatalogFile.class);
+        return new CatalogReader(parsed.locator()).build(parsed.value(), display);
+    }
+
+    static Catalog parse(String text, String display, boolean json) throws InputException {
+        StructuredFile.Parsed<CatalogFile> parsed = StructuredFile.parse(text, display, json, CatalogFile.class);
+        return new CatalogReader(parsed.locator()).build(parsed.value(), display);
+    }
+
+    private Catalog build(CatalogFile f, String display) throws InputException {
+        if (f.name() == null || f.name().isBlank()) {
+            problem("name", "is missing", "give the catalog a name");
+        }
+        List<InverterSpec> inverters = new ArrayList<>();
+        List<BatteryModule> modules = new ArrayList<>();
+        Set<String> ids = new HashSet<>();
+        if (f.inverters() != null) {
+            for (int i = 0; i < f.inverters().size(); i++) {
+                InverterSpec s = inverter(f.inverters().get(i), "inverters[" + i + "]", ids);
+                if (s != null) {
+                    inverters.add(s);
+                }
+            }
+        }
+        if (f.batteryModules() != null) {
+            for (int i = 0; i < f.batteryModules().size(); i++) {
+                BatteryModule m = module(f.batteryModules().get(i), "batteryModules[" + i + "]", ids);
+                if (m != null) {
+                    modules.add(m);
+                }
+            }
+        }
+        if (problems.isEmpty() && inverters.isEmpty()) {
+            problem("inverters", "the catalog has no inverters", "list at least one");
+        }
+        if (problems.isEmpty() && modules.isEmpty()) {
+            problem("batteryModules", "the catalog has no battery modules", "list at least one");
+        }
+        if (!problems.isEmpty()) {
+            throw new InputException(problems);
+        }
+        return new Catalog(f.name(), display, Boolean.TRUE.equals(f.demoData()), f.note() == null ? "" : f.note(),
+                inverters, modules);
+    }
+
+    private InverterSpec inverter(InverterEntry e, String p, Set<String> ids) {
+        if (e == null) {
+            problem(p, "is empty", "");
+            return null;
+        }
+        int before = problems.size();
+        String id = id(e.id(), p, ids);
+        Double bus = positive(p + ".busClassV", e.busClassV(), 1e4);
+        Double min = null;
+        Double max = null;
+        if (e.dcWindowV() == null) {
+            problem(p + ".dcWindowV", "is missing", "give { min: …, max: … } in volts");
+        } else {
+            min = positive(p + ".dcWindowV.min", e.dcWindowV().min(), 2e3);
+            max = positive(p + ".dcWindowV.max", e.dcWindowV().max(), 2e3);
+            if (min != null && max != null && min >= max) {
+                problem(p + ".dcWindowV", "min " + min + " V is not below max " + max + " V", "");
+            }
+        }
+        AcOutput ac = null;
+        if (e.ac() == null) {
+            problem(p + ".ac", "is missing", "give voltsRms, frequenciesHz and splitPhase");
+        } else {
+            Double v = positive(p + ".ac.voltsRms", e.ac().voltsRms(), 1000);
+            List<Double> freqs = e.ac().frequenciesHz();
+            if (freqs == null || freqs.isEmpty()) {
+                problem(p + ".ac.frequenciesHz", "is missing", "e.g. [60] or [50, 60]");
+            } else {
+                for (int i = 0; i < freqs.size(); i++) {
+                    Double fq = freqs.get(i);
+                    if (fq == null || fq != 50.0 && fq != 60.0) {
+                        problem(p + ".ac.frequenciesHz[" + i + "]", "must be 50 or 60, got " + fq, "");
+                    }
+                }
+            }
+            if (v != null && freqs != null && !freqs.isEmpty() && problems.size() == before) {
+                ac = new AcOutput(v, freqs, Boolean.TRUE.equals(e.ac().splitPhase()));
+            }
+        }
+        Double w = positive(p + ".continuousW", e.continuousW(), 1e6);
+        Double va = e.continuousVa() == null ? w : positive(p + ".continuousVa", e.continuousVa(), 1e6);
+        if (w != null && va != null && va < w) {
+            problem(p + ".continuousVa", va + " VA is below the continuous " + w + " W", "VA ≥ W");
+        }
+        double perLeg = 0;
+        if (e.ac() != null && Boolean.TRUE.equals(e.ac().splitPhase())) {
+            Double leg = positive(p + ".perLegVa", e.perLegVa(), 1e6);
+            perLeg = leg == null ? 0 : leg;
+        } else if (e.perLegVa() != null) {
+            problem(p + ".perLegVa", "is only for split-phase outputs", "remove it or set ac.splitPhase: true");
+        }
+        List<SurgeRating> surge = new ArrayList<>();
+        if (e.surge() == null || e.surge().isEmpty()) {
+            problem(p + ".surge", "is missing", "list at least one { seconds, va } rating");
+        } else if (e.surge().size() > MAX_SURGE_RATINGS) {
+            problem(p + ".surge", "lists " + e.surge().size() + " ratings", "at most " + MAX_SURGE_RATINGS);
+        } else {
+            for (int i = 0; i < e.surge().size(); i++) {
+                SurgeEntry s = e.surge().get(i);
+                String sp = p + ".surge[" + i + "]";
+                if (s == null) {
+                    problem(sp, "is empty", "");
+                    continue;
+                }
+                Double sec = positive(sp + ".seconds", s.seconds(), 3600);
+                Double sva = positive(sp + ".va", s.va(), 1e7);
+                if (sva != null && va != null && sva < va) {
+                    problem(sp + ".va", sva + " VA is below the continuous " + va + " VA", "a surge rating at least the continuous VA");
+                }
+                if (sec != null && sva != null) {
+                    surge.add(new SurgeRating(sec, sva));
+                }
+            }
+            List<SurgeRating> sorted = surge.stream().sorted(java.util.Comparator.comparingDouble(SurgeRating::durationS)).toList();
+            for (int i = 1; i < sorted.size(); i++) {
+                if (sorted.get(i).durationS() == sorted.get(i - 1).durationS()) {
+                    problem(p + ".surge", "two ratings have the same duration", "one rating per duration");
+                } else if (sorted.get(i).va() > sorted.get(i - 1).va()) {
+                    problem(p + ".surge", "a longer rating has more VA than a shorter one", "VA must not rise with duration");
+                }
+            }
+        }
+        double deratingStart = 25;
+        double deratingPct = 0;
+        if (e.derating() != null) {
+            Double ds = e.derating().startC();
+            Double dp = e.derating().pctPerC();
+            if (ds == null || ds < -20 || ds > 70) {
+                problem(p + ".derating.startC", "must be −20–70 °C, got " + ds, "");
+            } else {
+                deratingStart = ds;
+            }
+            if (dp == null || dp < 0 || dp > 20) {
+                problem(p + ".derating.pctPerC", "must be 0–20 %/°C, got " + dp, "");
+            } else {
+                deratingPct = dp;
+            }
+        }
+        List<EfficiencyPoint> points = new ArrayList<>();
+        if (e.efficiency() == null || e.efficiency().size() < 3) {
+            problem(p + ".efficiency", "needs at least 3 points, got " + (e.efficiency() == null ? 0 : e.efficiency().size()),
+                    "list { loadPct, pct } points from light to full load");
+        } else {
+            double last = 0;
+            for (int i = 0; i < e.efficiency().size(); i++) {
+                EfficiencyEntry pt = e.efficiency().get(i);
+                String ep = p + ".efficiency[" + i + "]";
+                if (pt == null || pt.loadPct() == null || pt.pct() == null) {
+                    problem(ep, "needs loadPct and pct", "");
+                    continue;
+                }
+                if (!(pt.loadPct() > 0 && pt.loadPct() <= 150)) {
+                    problem(ep + ".loadPct", "must be in (0, 150] %, got " + pt.loadPct(), "");
+                    continue;
+                }
+                if (!(pt.pct() > 50 && pt.pct() < 100)) {
+                    problem(ep + ".pct", "must be between 50 and 100 %, got " + pt.pct(), "");
+                    continue;
+                }
+                if (pt.loadPct() <= last) {
+                    problem(ep + ".loadPct", "points must be in increasing load", "");
+                    continue;
+                }
+                last = pt.loadPct();
+                points.add(new EfficiencyPoint(pt.loadPct() / 100.0, pt.pct() / 100.0));
+            }
+        }
+        Double noLoad = nonNegative(p + ".noLoadW", e.noLoadW(), 1e4);
+        InverterSpec.Topology topology = InverterSpec.Topology.TRANSFORMER;
+        if (e.topology() != null) {
+            String t = e.topology().toUpperCase(Locale.ROOT).replace('-', '_');
+            try {
+                topology = InverterSpec.Topology.valueOf(t);
+            } catch (IllegalArgumentException ex) {
+                problem(p + ".topology", "unknown topology \"" + e.topology() + "\"",
+                        "transformer, transformerless-boost or transformerless-direct");
+            }
+        }
+        double mod = 0.95;
+        if (e.maxModulationIndex() != null) {
+            if (!(e.maxModulationIndex() > 0 && e.maxModulationIndex() <= 1.2)) {
+                problem(p + ".maxModulationIndex", "must be in (0, 1.2], got " + e.maxModulationIndex(), "");
+            } else {
+                mod = e.maxModulationIndex();
+            }
+        }
+        Double price = nonNegative(p + ".price", e.price(), 1e8);
+        if (problems.size() > before || id == null || bus == null || min == null || max == null || ac == null
+                || w == null || va == null || noLoad == null || price == null) {
+            return null;
+        }
+        LossModel loss = LossModel.fit(w, noLoad, points);
+        if (!loss.physical()) {
+            problem(p + ".efficiency", "the points give a loss that falls as output rises (k1 = "
+                    + String.format(Locale.ROOT, "%.4g", loss.k1()) + ", k2 = " + String.format(Locale.ROOT, "%.4g", loss.k2()) + ")",
+                    "check the efficiency points and the no-load draw");
+            return null;
+        }
+        return new InverterSpec(id, e.description() == null ? id : e.description(), bus, min, max, ac, w, va, perLeg,
+                surge, deratingStart, deratingPct, points, noLoad, topology, mod, price, loss);
+    }
+
+    private BatteryModule module(ModuleEntry e, String p, Set<String> ids) {
+        if (e == null) {
+            problem(p, "is empty", "");
+            return null;
+        }
+        int before = problems.size();
+        String id = id(e.id(), p, ids);
+        Chemistry chem = null;
+        if (e.chemistry() == null) {
+            problem(p + ".chemistry", "is missing", "lifepo4, agm, gel or flooded");
+        } else {
+            chem = Chemistry.fromWord(e.chemistry());
+            if (chem == null) {
+                problem(p + ".chemistry", "unknown chemistry \"" + e.chemistry() + "\"", "lifepo4, agm, gel or flooded");
+            }
+        }
+        Double v = positive(p + ".nominalV", e.nominalV(), 2000);
+        Double ah = positive(p + ".capacityAh", e.capacityAh(), 1e5);
+        Double h = positive(p + ".rateHours", e.rateHours(), 1000);
+        Double r = positive(p + ".internalResistanceMilliohm", e.internalResistanceMilliohm(), 1e5);
+        Double cont = positive(p + ".maxContinuousA", e.maxContinuousA(), 1e5);
+        Double surge = e.maxSurgeA() == null ? cont : positive(p + ".maxSurgeA", e.maxSurgeA(), 1e5);
+        Double surgeS = e.surgeSeconds() == null ? Double.valueOf(1.0) : positive(p + ".surgeSeconds", e.surgeSeconds(), 3600);
+        Double charge = positive(p + ".maxChargeA", e.maxChargeA(), 1e5);
+        int parallel = 1;
+        if (e.maxParallel() == null || e.maxParallel() < 1 || e.maxParallel() > 64) {
+            problem(p + ".maxParallel", "must be 1–64, got " + e.maxParallel(), "");
+        } else {
+            parallel = e.maxParallel();
+        }
+        int series = chem == null || chem.leadAcid() ? 1000 : 1;
+        if (e.maxSeries() != null) {
+            if (e.maxSeries() < 1 || e.maxSeries() > 1000) {
+                problem(p + ".maxSeries", "must be 1–1000, got " + e.maxSeries(), "");
+            } else {
+                series = e.maxSeries();
+            }
+        }
+        Double price = nonNegative(p + ".price", e.price(), 1e8);
+        if (surge != null && cont != null && surge < cont) {
+            problem(p + ".maxSurgeA", surge + " A is below the continuous " + cont + " A", "");
+        }
+        if (chem != null && v != null) {
+            double cells = v / chem.cellNominalV();
+            if (Math.abs(cells - Math.rint(cells)) > 0.05 * cells || Math.rint(cells) < 1) {
+                problem(p + ".nominalV", v + " V is not a whole number of " + chem.cellNominalV() + " V " + chem.word() + " cells", "");
+            }
+        }
+        if (problems.size() > before || id == null || chem == null || v == null || ah == null || h == null || r == null
+                || cont == null || surge == null || surgeS == null || charge == null || price == null) {
+            return null;
+        }
+        return new BatteryModule(id, e.description() == null ? id : e.description(), chem, v, ah, h, r / 1000.0, cont,
+                surge, surgeS, charge, parallel, series, price);
+    }
+
+    private String id(String id, String p, Set<String> ids) {
+        if (id == null || id.isBlank()) {
+            problem(p + ".id", "is missing", "give each component an id");
+            return null;
+        }
+        if (!ids.add(id)) {
+            problem(p + ".id", "\"" + id + "\" is used twice", "ids must be unique in a catalog");
+            return null;
+        }
+        return id;
+    }
+
+    private Double positive(String path, Double v, double max) {
+        if (v == null) {
+            problem(path, "is missing", "");
+            return null;
+        }
+        if (!(v > 0) || v > max) {
+            problem(path, "must be greater than 0 and at most " + max + ", got " + v, "");
+            return null;
+        }
+        return v;
+    }
+
+    private Double nonNegative(String path, Double v, double max) {
+        if (v == null) {
+            problem(path, "is missing", "");
+            return null;
+        }
+        if (!(v >= 0) || v > max) {
+            problem(path, "must be 0–" + max + ", got " + v, "");
+            return null;
+        }
+        return v;
+    }
+
+    private void problem(String path, String message, String expected) {
+        problems.add(new Problem(locator.apply(path), path, message, expected));
+    }
+}

@@ -1,0 +1,302 @@
+package org.holdover.sizing;
+
+import java.nio.file.Path;
+import java.time.ZoneId;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.regex.Matcher;
+import org.holdover.battery.Chemistry;
+import org.holdover.catalog.Catalog;
+import org.holdover.catalog.CatalogReader;
+import org.holdover.load.Appliance;
+import org.holdover.load.Leg;
+import org.holdover.load.LoadAnalysis;
+import org.holdover.load.LoadModel;
+import org.holdover.load.LockedRotor;
+import org.holdover.load.MeasuredProfile;
+import org.holdover.load.Motor;
+import org.holdover.load.NemaCodeLetter;
+import org.holdover.load.ProfileCsvReader;
+import org.holdover.load.YearCalendar;
+import org.holdover.project.InputException;
+import org.holdover.project.Problem;
+import org.holdover.project.Project;
+import org.holdover.project.ProjectInput;
+import org.holdover.project.ProjectInput.ApplianceInput;
+import org.holdover.project.ProjectInput.MotorInput;
+import org.holdover.project.ProjectValidator;
+
+/**
+ * Turns a validated project into the sizing input: defaults applied (each recorded as an assumption
+ * with its source), the load profile read, appliances placed on legs, the catalog loaded.
+ */
+public final class ProjectAssembler {
+
+    /** Defaults and their sources. */
+    public static final double DEFAULT_MARGIN = 1.25;
+    public static final double DEFAULT_MAX_BATTERY_A = 150;
+    public static final double DEFAULT_PF_RESISTIVE = 1.0;
+    public static final double DEFAULT_PF_MOTOR = 0.8;
+    public static final double DEFAULT_PF_PROFILE = 0.9;
+    public static final double DEFAULT_LR_PF = 0.5;
+    public static final double DEFAULT_START_S = 1.0;
+    public static final double DEFAULT_SOFT_FACTOR = 0.5;
+    public static final double DEFAULT_VFD_FACTOR = 0.25;
+    public static final double DEFAULT_TEMP_C = 25;
+    public static final int DEFAULT_YEAR = 2025;
+    static final String PRACTICE = "common practice, no source";
+
+    private ProjectAssembler() {
+    }
+
+    public static SizingInput assemble(Project project) throws InputException {
+        ProjectInput p = project.input();
+        List<Assumption> assumptions = new ArrayList<>();
+        List<Problem> warnings = new ArrayList<>(project.warnings());
+        ProjectInput.SiteInput site = p.site();
+        boolean split = site.ac().wiring() == ProjectInput.AcWiring.SPLIT_PHASE;
+        double volts = site.ac().voltsRms();
+
+        ZoneId zone;
+        if (site.timeZone() != null) {
+            zone = ZoneId.of(site.timeZone());
+        } else if (site.utcOffsetHours() != null) {
+            zone = ZoneOffset.ofTotalSeconds((int) Math.round(site.utcOffsetHours() * 3600));
+        } else {
+            zone = ZoneOffset.ofHours((int) Math.round(site.longitudeDeg() / 15.0));
+        }
+
+        MeasuredProfile measured = null;
+        ProjectInput.ProfileInput pr = p.loads().profile();
+        if (pr != null) {
+            Path file = project.resolve(pr.file());
+            measured = ProfileCsvReader.read(file, project.displayOf(pr.file()), site.year(), zone,
+                    pr.maxGapHours() == null ? 0 : pr.maxGapHours());
+            warnings.addAll(measured.warnings());
+        }
+        int year = site.year() != null ? site.year() : measured != null ? measured.year() : DEFAULT_YEAR;
+        assumptions.add(new Assumption("Calendar year of the hourly series", year, "", site.year() != null ? "project"
+                : "default", "weekdays and leap year follow this year"));
+        YearCalendar cal = new YearCalendar(year);
+
+        boolean backup = p.mode() == ProjectInput.Mode.BACKUP;
+        List<Appliance> appliances = new ArrayList<>();
+        List<ApplianceInput> ins = p.loads().appliances() == null ? List.of() : p.loads().appliances();
+        List<Leg> legs = assignLegs(ins, split);
+        boolean anyMotor = false;
+        for (int i = 0; i < ins.size(); i++) {
+            ApplianceInput a = ins.get(i);
+            appliances.add(appliance(a, legs.get(i), backup, volts, split));
+            anyMotor |= a.motor() != null;
+        }
+        double[] profileW = null;
+        double profilePf = DEFAULT_PF_PROFILE;
+        if (measured != null) {
+            boolean served = !backup || pr.critical() == null || pr.critical();
+            double scale = pr.scale() == null ? 1.0 : pr.scale();
+            profileW = measured.hourlyW().clone();
+            for (int h = 0; h < profileW.length; h++) {
+                profileW[h] = served ? profileW[h] * scale : 0.0;
+            }
+            profilePf = pr.powerFactor() == null ? DEFAULT_PF_PROFILE : pr.powerFactor();
+            assumptions.add(new Assumption("Power factor of the measured profile", profilePf, "", given(pr.powerFactor()),
+                    pr.powerFactor() == null ? PRACTICE : "project"));
+            assumptions.add(new Assumption("Profile scale factor", scale, "×", given(pr.scale()), "project"));
+        }
+        if (ins.stream().anyMatch(a -> a.powerFactor() == null)) {
+            assumptions.add(new Assumption("Running power factor, resistive loads (when not given)", DEFAULT_PF_RESISTIVE, "",
+                    "default", PRACTICE));
+            if (anyMotor) {
+                assumptions.add(new Assumption("Running power factor, motor loads (when not given)", DEFAULT_PF_MOTOR, "",
+                        "default", PRACTICE));
+            }
+        }
+        if (anyMotor) {
+            assumptions.add(new Assumption("Locked-rotor power factor (when not given)", DEFAULT_LR_PF, "", "default", PRACTICE));
+            assumptions.add(new Assumption("Start duration (when not given)", DEFAULT_START_S, "s", "default", PRACTICE));
+            assumptions.add(new Assumption("Soft starter: share of direct-on-line starting demand (when not given)",
+                    DEFAULT_SOFT_FACTOR, "", "default", PRACTICE));
+            assumptions.add(new Assumption("Variable-frequency drive: share of direct-on-line starting demand (when not given)",
+                    DEFAULT_VFD_FACTOR, "", "default", PRACTICE));
+        }
+
+        ProjectInput.RulesInput rules = p.rules();
+        int together = rules != null && rules.motorsStartingTogether() != null ? rules.motorsStartingTogether() : 1;
+        if (anyMotor) {
+            assumptions.add(new Assumption("Motors starting at the same moment (largest first)", together, "",
+                    rules != null && rules.motorsStartingTogether() != null ? "project" : "default", PRACTICE));
+        }
+        LoadAnalysis loads = LoadModel.analyse(cal, appliances, profileW, profilePf, together, split);
+
+        double margin = rules != null && rules.inverterMargin() != null ? rules.inverterMargin() : DEFAULT_MARGIN;
+        assumptions.add(new Assumption("Inverter margin over coincident running demand", margin, "×",
+                rules != null && rules.inverterMargin() != null ? "project" : "default", PRACTICE));
+        double maxA = rules != null && rules.maxBatteryCurrentA() != null ? rules.maxBatteryCurrentA() : DEFAULT_MAX_BATTERY_A;
+        assumptions.add(new Assumption("Largest continuous battery current for the bus choice", maxA, "A",
+                rules != null && rules.maxBatteryCurrentA() != null ? "project" : "default",
+                PRACTICE + "; 150 A × 1.25 = 187.5 A fits one 3/0 AWG copper conductor (NEC 2023 Table 310.16, 75 °C: 200 A)"));
+        int maxParallel = rules != null && rules.maxParallelStrings() != null ? rules.maxParallelStrings() : 0;
+
+        double invAmbient = site.inverterAmbientC() != null ? site.inverterAmbientC() : DEFAULT_TEMP_C;
+        assumptions.add(new Assumption("Ambient around the inverter", invAmbient, "°C", given(site.inverterAmbientC()),
+                site.inverterAmbientC() != null ? "project" : PRACTICE));
+        double cold = DEFAULT_TEMP_C;
+        if (site.batteryAmbientC() != null && site.batteryAmbientC().coldest() != null) {
+            cold = site.batteryAmbientC().coldest();
+        } else {
+            warnings.add(project.problemAt("site.batteryAmbientC.coldest", "not given; the battery is taken to be at "
+                    + (int) DEFAULT_TEMP_C + " °C", "give the coldest battery temperature: capacity falls in the cold"));
+        }
+        assumptions.add(new Assumption("Coldest battery temperature", cold, "°C",
+                site.batteryAmbientC() != null && site.batteryAmbientC().coldest() != null ? "project" : "default",
+                "capacity temperature correction is taken at this temperature"));
+
+        ProjectInput.BatteryInput b = p.battery();
+        Chemistry chem = b != null && b.chemistry() != null ? Chemistry.fromWord(b.chemistry()) : null;
+        Double dod = b != null && b.maxDepthOfDischargePct() != null ? b.maxDepthOfDischargePct() / 100.0 : null;
+        Double eol = b != null && b.endOfLifeCapacityPct() != null ? b.endOfLifeCapacityPct() / 100.0 : null;
+        if (dod != null) {
+            assumptions.add(new Assumption("Deepest design discharge (all chemistries)", dod, "", "project", "project"));
+        }
+        if (eol != null) {
+            assumptions.add(new Assumption("Capacity at end of life (all chemistries)", eol, "", "project", "project"));
+        }
+
+        Catalog catalog;
+        if (p.catalog() == null || p.catalog().equals("builtin")) {
+            catalog = CatalogReader.builtin();
+        } else {
+            catalog = CatalogReader.read(project.resolve(p.catalog()), project.displayOf(p.catalog()));
+        }
+        if (catalog.demoData()) {
+            warnings.add(new Problem(org.holdover.project.SourceLocation.of(catalog.source()), "",
+                    "the components are invented demo data", "use your own catalog for a real quote"));
+        }
+        double outage = backup ? p.backup().outageHours() : 0;
+        double days = backup ? 0 : p.offGrid().autonomyDays();
+        return new SizingInput(p.name(), p.mode(), volts, site.ac().frequencyHz(), split, invAmbient, cold, margin, maxA,
+                maxParallel, chem, dod, eol, b == null ? null : b.location(), outage, days, loads, catalog, assumptions,
+                warnings, p.notes() == null ? List.of() : p.notes());
+    }
+
+    private static String given(Object o) {
+        return o != null ? "project" : "default";
+    }
+
+    static Appliance appliance(ApplianceInput a, Leg leg, boolean backup, double siteVolts, boolean split) {
+        boolean[] hours = new boolean[24];
+        if (a.hours() == null) {
+            java.util.Arrays.fill(hours, true);
+        } else {
+            for (String w : a.hours()) {
+                Matcher m = ProjectValidator.WINDOW.matcher(w);
+                if (!m.matches()) {
+                    throw new IllegalStateException("unvalidated window " + w);
+                }
+                int start = Integer.parseInt(m.group(1));
+                int end = Integer.parseInt(m.group(2)) % 24;
+                int h = start;
+                do {
+                    hours[h] = true;
+                    h = (h + 1) % 24;
+                } while (h != end);
+            }
+        }
+        int windowHours = 0;
+        for (boolean h : hours) {
+            windowHours += h ? 1 : 0;
+        }
+        double duty;
+        if (a.dutyCycle() != null) {
+            duty = a.dutyCycle();
+        } else if (a.hoursPerDay() != null) {
+            duty = a.hoursPerDay() / windowHours;
+        } else {
+            duty = 1.0;
+        }
+        boolean[] months = new boolean[12];
+        if (a.months() == null) {
+            java.util.Arrays.fill(months, true);
+        } else {
+            for (int m : a.months()) {
+                months[m - 1] = true;
+            }
+        }
+        ProjectInput.DaySet days = a.days() == null ? ProjectInput.DaySet.ALL : a.days();
+        boolean served = !backup || a.critical() == null || a.critical();
+        Motor motor = a.motor() == null ? null : motor(a.motor(), leg, siteVolts);
+        double pf = a.powerFactor() != null ? a.powerFactor() : a.motor() != null ? DEFAULT_PF_MOTOR : DEFAULT_PF_RESISTIVE;
+        return new Appliance(a.name().strip(), a.quantity() == null ? 1 : a.quantity(), a.watts(), pf, Math.min(1.0, duty),
+                hours, days != ProjectInput.DaySet.WEEKENDS, days != ProjectInput.DaySet.WEEKDAYS, months, served, leg,
+                Boolean.TRUE.equals(a.inProfile()), motor);
+    }
+
+    static Motor motor(MotorInput m, Leg leg, double siteVolts) {
+        LockedRotor lr;
+        if (m.lockedRotorAmps() != null) {
+            double v = m.volts() != null ? m.volts() : leg == Leg.L1 || leg == Leg.L2 ? 120.0 : siteVolts;
+            lr = new LockedRotor.ByNameplateAmps(m.lockedRotorAmps(), v);
+        } else if (m.horsepower() != null && m.codeLetter() != null) {
+            lr = new LockedRotor.ByCodeLetter(m.horsepower(),
+                    NemaCodeLetter.valueOf(m.codeLetter().strip().toUpperCase(Locale.ROOT)));
+        } else {
+            lr = new LockedRotor.ByMultiple(m.startMultiple());
+        }
+        Motor.Starter starter = m.starter() == null ? Motor.Starter.DIRECT : Motor.Starter.valueOf(m.starter().name());
+        double factor = switch (starter) {
+            case DIRECT -> 1.0;
+            case SOFT -> m.starterFactor() != null ? m.starterFactor() : DEFAULT_SOFT_FACTOR;
+            case VFD -> m.starterFactor() != null ? m.starterFactor() : DEFAULT_VFD_FACTOR;
+        };
+        return new Motor(lr, m.startSeconds() != null ? m.startSeconds() : DEFAULT_START_S, starter, factor,
+                m.lockedRotorPowerFactor() != null ? m.lockedRotorPowerFactor() : DEFAULT_LR_PF);
+    }
+
+    /**
+     * Legs for each appliance: as written, 240 V loads across both, and the rest placed largest first on
+     * the leg carrying less running VA so far.
+     */
+    static List<Leg> assignLegs(List<ApplianceInput> ins, boolean split) {
+        List<Leg> legs = new ArrayList<>();
+        for (int i = 0; i < ins.size(); i++) {
+            legs.add(Leg.LINE);
+        }
+        if (!split) {
+            return legs;
+        }
+        double l1 = 0;
+        double l2 = 0;
+        List<Integer> auto = new ArrayList<>();
+        for (int i = 0; i < ins.size(); i++) {
+            ApplianceInput a = ins.get(i);
+            double va = runningVa(a);
+            ProjectInput.Leg leg = a.leg() == null ? ProjectInput.Leg.AUTO : a.leg();
+            switch (leg) {
+                case L1 -> { legs.set(i, Leg.L1); l1 += va; }
+                case L2 -> { legs.set(i, Leg.L2); l2 += va; }
+                case L1L2 -> { legs.set(i, Leg.BOTH); l1 += va / 2; l2 += va / 2; }
+                case AUTO -> auto.add(i);
+            }
+        }
+        auto.sort(Comparator.comparingDouble((Integer i) -> -runningVa(ins.get(i))).thenComparingInt(i -> i));
+        for (int i : auto) {
+            double va = runningVa(ins.get(i));
+            if (l1 <= l2) {
+                legs.set(i, Leg.L1);
+                l1 += va;
+            } else {
+                legs.set(i, Leg.L2);
+                l2 += va;
+            }
+        }
+        return legs;
+    }
+
+    private static double runningVa(ApplianceInput a) {
+        double pf = a.powerFactor() != null ? a.powerFactor() : a.motor() != null ? DEFAULT_PF_MOTOR : DEFAULT_PF_RESISTIVE;
+        return a.watts() / pf * (a.quantity() == null ? 1 : a.quantity());
+    }
+}

@@ -1,0 +1,303 @@
+package org.holdover.sizing;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.TreeSet;
+import org.holdover.battery.BankDesign;
+import org.holdover.battery.BankRequirement;
+import org.holdover.battery.BankSizing;
+import org.holdover.battery.BatteryModule;
+import org.holdover.battery.Chemistry;
+import org.holdover.inverter.InverterSpec;
+import org.holdover.inverter.LossModel;
+import org.holdover.inverter.WeightedEfficiency;
+import org.holdover.load.LoadAnalysis;
+import org.holdover.load.YearCalendar;
+import org.holdover.project.ProjectInput;
+
+/**
+ * The sizing rules: inverters against the demand, one bus class at a time from the lowest, the battery
+ * bank for the inverter chosen at each class, and the lowest class that gives a passing system.
+ */
+public final class Sizing {
+
+    /** Residential energy-storage limits, kWh: 2021 IRC R328 (from memory; NFPA 855 has similar limits). */
+    public static final double IRC_UNIT_LIMIT_KWH = 20;
+    public static final double IRC_UTILITY_SPACE_LIMIT_KWH = 40;
+    public static final double IRC_GARAGE_OUTDOOR_LIMIT_KWH = 80;
+    public static final String IRC_BASIS = "2021 IRC R328 / NFPA 855-2020 residential limits (from memory; check the edition your jurisdiction adopted)";
+
+    private Sizing() {
+    }
+
+    public static SizingResult run(SizingInput in) {
+        LoadAnalysis.Figures f = in.loads().figures();
+        List<InverterAssessment> assessments = new ArrayList<>();
+        for (InverterSpec s : in.catalog().inverters()) {
+            assessments.add(assess(s, in));
+        }
+        TreeSet<Double> classes = new TreeSet<>();
+        in.catalog().inverters().forEach(s -> classes.add(s.busClassV()));
+        List<BusOption> buses = new ArrayList<>();
+        BusOption chosen = null;
+        EnergyBasis chosenEnergy = null;
+        for (double cls : classes) {
+            BusWork w = busOption(cls, assessments, in);
+            BusOption option = w.option;
+            if (option.passes() && chosen == null) {
+                chosen = new BusOption(option.busClassV(), option.inverter(), option.currentCheck(), option.energyDcWh(),
+                        option.banks(), option.bank(), true, "lowest bus voltage that passes every check");
+                chosenEnergy = w.energy;
+                option = chosen;
+            } else if (option.passes()) {
+                option = new BusOption(option.busClassV(), option.inverter(), option.currentCheck(), option.energyDcWh(),
+                        option.banks(), option.bank(), true, "passes, but a lower bus voltage also passes");
+            }
+            buses.add(option);
+        }
+        if (chosen == null) {
+            return new SizingResult(in, assessments, buses, null, null, null, List.of(), List.of(), 0, 0);
+        }
+        InverterAssessment inv = chosen.inverter();
+        BankDesign bank = chosen.bank();
+        List<Check> checks = new ArrayList<>(inv.checks());
+        checks.add(chosen.currentCheck());
+        checks.addAll(bankChecks(bank, inv.spec(), chosenEnergy));
+        List<Check> advisories = fireCode(bank, in.location());
+        LossModel loss = inv.spec().loss();
+        return new SizingResult(in, assessments, buses, chosen, chosenEnergy, bank.requirement(), checks, advisories,
+                WeightedEfficiency.CEC.of(loss), WeightedEfficiency.EURO.of(loss));
+    }
+
+    static InverterAssessment assess(InverterSpec s, SizingInput in) {
+        LoadAnalysis.Figures f = in.loads().figures();
+        List<String> mismatch = new ArrayList<>();
+        if (s.ac().voltsRms() != in.acVoltsRms()) {
+            mismatch.add(fmt(s.ac().voltsRms()) + " V output, the service is " + fmt(in.acVoltsRms()) + " V");
+        }
+        if (s.ac().splitPhase() != in.splitPhase()) {
+            mismatch.add(s.ac().splitPhase() ? "split-phase output on a single-phase service"
+                    : "single-phase output, the service is 120/240 V split phase");
+        }
+        if (!s.ac().frequenciesHz().contains(in.frequencyHz())) {
+            mismatch.add("no " + fmt(in.frequencyHz()) + " Hz setting");
+        }
+        double derate = s.deratingFactor(in.inverterAmbientC());
+        List<Check> checks = new ArrayList<>();
+        String marginBasis = "margin " + in.inverterMargin() + " × coincident running demand";
+        checks.add(new Check("inverter.continuousW", "Continuous output (W) at " + fmt(in.inverterAmbientC()) + " °C",
+                derate * s.continuousW(), in.inverterMargin() * f.runningPeakW(), "W", Check.Sense.AT_LEAST, marginBasis));
+        checks.add(new Check("inverter.continuousVa", "Continuous output (VA) at " + fmt(in.inverterAmbientC()) + " °C",
+                derate * s.continuousVa(), in.inverterMargin() * f.runningPeakVa(), "VA", Check.Sense.AT_LEAST, marginBasis));
+        boolean motors = !in.loads().starting().isEmpty();
+        if (motors) {
+            checks.add(new Check("inverter.surgeVa", "Surge output for a " + fmt(f.surgeS()) + " s motor start",
+                    s.surgeVa(f.surgeS()), f.surgeVa(), "VA", Check.Sense.AT_LEAST,
+                    "running demand of everything else + starting demand of the motors starting together"));
+        }
+        if (in.splitPhase() && s.ac().splitPhase()) {
+            checks.add(new Check("inverter.legVa", "Continuous output of one leg (VA)", derate * s.perLegVa(),
+                    in.inverterMargin() * Math.max(f.legL1PeakVa(), f.legL2PeakVa()), "VA", Check.Sense.AT_LEAST,
+                    marginBasis + " on the more loaded leg"));
+            if (motors) {
+                checks.add(new Check("inverter.legSurgeVa", "Surge output of one leg (VA)",
+                        s.surgeVa(f.surgeS()) * s.perLegVa() / s.continuousVa(), Math.max(f.surgeL1Va(), f.surgeL2Va()),
+                        "VA", Check.Sense.AT_LEAST, "per-leg surge taken in proportion to the per-leg continuous rating"));
+            }
+        }
+        LossModel loss = s.loss();
+        double contA = loss.inputW(f.runningPeakW()) / s.dcMinV();
+        double surgeA = loss.inputW(motors ? f.surgeW() : f.runningPeakW()) / s.dcMinV();
+        return new InverterAssessment(s, mismatch.isEmpty(), String.join("; ", mismatch), derate, checks, contA, surgeA);
+    }
+
+    private record BusWork(BusOption option, EnergyBasis energy) {
+    }
+
+    private static BusWork busOption(double cls, List<InverterAssessment> all, SizingInput in) {
+        List<InverterAssessment> atClass = all.stream().filter(a -> a.spec().busClassV() == cls).toList();
+        List<InverterAssessment> passing = atClass.stream().filter(InverterAssessment::passes)
+                .sorted(Comparator.comparingDouble((InverterAssessment a) -> a.spec().price())
+                        .thenComparingDouble(a -> a.spec().continuousW()))
+                .toList();
+        if (passing.isEmpty()) {
+            return new BusWork(new BusOption(cls, null, null, 0, List.of(), null, false,
+                    "no inverter at " + fmt(cls) + " V passes: " + closestFailure(atClass)), null);
+        }
+        BusWork best = null;
+        double bestCost = Double.POSITIVE_INFINITY;
+        BusWork firstTried = null;
+        for (InverterAssessment inv : passing) {
+            Check current = new Check("bus.continuousA", "Continuous battery current at the low-voltage cutoff",
+                    inv.continuousDcA(), in.maxBatteryCurrentA(), "A", Check.Sense.AT_MOST,
+                    "project rule: largest continuous battery current (keeps cables and fuses practical)");
+            EnergyBasis energy = energy(in, inv.spec().loss());
+            List<BankOption> banks = new ArrayList<>();
+            for (BatteryModule m : in.catalog().batteryModules()) {
+                if (in.chemistry() != null && m.chemistry() != in.chemistry()) {
+                    continue;
+                }
+                if (m.seriesFor(cls) == 0) {
+                    continue;
+                }
+                BankDesign d = BankSizing.size(m, requirement(in, m.chemistry(), cls, energy, inv));
+                banks.add(new BankOption(d, incompatibility(d, inv.spec())));
+            }
+            BankOption bank = banks.stream().filter(BankOption::usable)
+                    .min(Comparator.comparingDouble((BankOption b) -> b.design().price())
+                            .thenComparingDouble(b -> b.design().bankEnergyWh()))
+                    .orElse(null);
+            boolean passes = current.passes() && bank != null;
+            String reason;
+            if (!current.passes()) {
+                reason = String.format(Locale.ROOT, "continuous battery current %.0f A exceeds the %.0f A rule",
+                        current.value(), current.limit());
+            } else if (bank == null) {
+                reason = banks.isEmpty() ? "no battery module in the catalog makes a " + fmt(cls) + " V bank"
+                        : "no battery bank fits: " + banks.get(0).design().module().id() + ": " + banks.get(0).reason();
+            } else {
+                reason = "passes";
+            }
+            BusWork w = new BusWork(new BusOption(cls, inv, current, energy.energyDcWh(), banks,
+                    bank == null ? null : bank.design(), passes, reason), energy);
+            if (firstTried == null) {
+                firstTried = w;
+            }
+            double cost = inv.spec().price() + (bank == null ? 0 : bank.design().price());
+            if (passes && cost < bestCost) {
+                best = w;
+                bestCost = cost;
+            }
+        }
+        return best != null ? best : firstTried;
+    }
+
+    private static String closestFailure(List<InverterAssessment> atClass) {
+        if (atClass.isEmpty()) {
+            return "none in the catalog";
+        }
+        List<InverterAssessment> matching = atClass.stream().filter(InverterAssessment::acMatch).toList();
+        if (matching.isEmpty()) {
+            return atClass.get(0).spec().id() + ": " + atClass.get(0).acMismatch();
+        }
+        InverterAssessment biggest = matching.stream().max(Comparator.comparingDouble(a -> a.spec().continuousW())).get();
+        Check c = biggest.firstFailure();
+        return String.format(Locale.ROOT, "largest, %s: %s %.0f %s < %.0f %s", biggest.spec().id(), c.label(),
+                c.value(), c.unit(), c.limit(), c.unit());
+    }
+
+    static BankRequirement requirement(SizingInput in, Chemistry c, double cls, EnergyBasis e, InverterAssessment inv) {
+        double dod = in.depthOfDischarge() != null ? in.depthOfDischarge() : c.defaultDepthOfDischarge();
+        double eol = in.endOfLife() != null ? in.endOfLife() : c.defaultEndOfLife();
+        return new BankRequirement(cls, e.energyDcWh(), e.dischargeHours(), dod, eol, in.batteryColdestC(),
+                inv.continuousDcA(), inv.surgeDcA(), in.loads().figures().surgeS(), in.maxParallelRule());
+    }
+
+    static String incompatibility(BankDesign d, InverterSpec s) {
+        if (!d.feasible()) {
+            return "";
+        }
+        if (d.absorptionV() > s.dcMaxV()) {
+            return String.format(Locale.ROOT, "charging voltage %.1f V is above the inverter's %.1f V DC maximum",
+                    d.absorptionV(), s.dcMaxV());
+        }
+        if (d.bankNominalV() < s.dcMinV()) {
+            return String.format(Locale.ROOT, "nominal %.1f V is below the inverter's %.1f V cutoff", d.bankNominalV(), s.dcMinV());
+        }
+        double lowest = Math.max(s.dcMinV(), d.endV());
+        if (lowest < s.minDcForAcPeakV()) {
+            return String.format(Locale.ROOT, "lowest battery voltage %.1f V is below the %.1f V the bridge needs for the AC peak",
+                    lowest, s.minDcForAcPeakV());
+        }
+        return "";
+    }
+
+    /** The DC energy basis of the battery sizing with a given inverter. */
+    public static EnergyBasis energy(SizingInput in, LossModel loss) {
+        LoadAnalysis la = in.loads();
+        YearCalendar cal = la.calendar();
+        int n = cal.hours();
+        double[] dc = new double[n];
+        double[] monthly = new double[12];
+        for (int h = 0; h < n; h++) {
+            dc[h] = loss.inputW(la.loadW()[h]);
+            monthly[cal.month(h) - 1] += dc[h];
+        }
+        int worst = 1;
+        for (int m = 1; m <= 12; m++) {
+            monthly[m - 1] /= cal.daysInMonth(m);
+            if (monthly[m - 1] > monthly[worst - 1]) {
+                worst = m;
+            }
+        }
+        if (in.mode() == ProjectInput.Mode.OFF_GRID) {
+            double e = in.autonomyDays() * monthly[worst - 1];
+            double ac = in.autonomyDays() * la.figures().monthlyDailyEnergyWh()[worst - 1];
+            return new EnergyBasis(dc, monthly, worst, 0, -1, e, in.autonomyDays() * 24.0, ac);
+        }
+        int window = Math.min(n, (int) Math.ceil(in.outageHours() - 1e-9));
+        double best = -1;
+        int bestStart = 0;
+        for (int s = 0; s + window <= n; s++) {
+            double sum = 0;
+            for (int h = s; h < s + window; h++) {
+                sum += dc[h];
+            }
+            if (sum > best) {
+                best = sum;
+                bestStart = s;
+            }
+        }
+        double ac = 0;
+        for (int h = bestStart; h < bestStart + window; h++) {
+            ac += la.loadW()[h];
+        }
+        return new EnergyBasis(dc, monthly, worst, window, bestStart, best, window, ac);
+    }
+
+    static List<Check> bankChecks(BankDesign b, InverterSpec s, EnergyBasis e) {
+        List<Check> checks = new ArrayList<>();
+        BatteryModule m = b.module();
+        checks.add(new Check("bank.strings", "Parallel strings", b.strings(), b.maxParallel(), "strings", Check.Sense.AT_MOST,
+                "module management-system limit / chemistry practice / project rule"));
+        checks.add(new Check("bank.continuousA", "Continuous current per string", b.continuousPerStringA(), m.maxContinuousA(),
+                "A", Check.Sense.AT_MOST, "module continuous discharge limit"));
+        double surgeLimit = b.requirement().surgeS() <= m.surgeS() ? m.maxSurgeA() : m.maxContinuousA();
+        checks.add(new Check("bank.surgeA", "Surge current per string", b.surgePerStringA(), surgeLimit, "A", Check.Sense.AT_MOST,
+                "module short-time discharge limit for the start duration"));
+        checks.add(new Check("bank.chargeV", "Bank charging voltage", b.absorptionV(), s.dcMaxV(), "V", Check.Sense.AT_MOST,
+                "inverter DC input maximum"));
+        if (s.minDcForAcPeakV() > 0) {
+            checks.add(new Check("inverter.acPeak", "Lowest battery voltage for the AC peak",
+                    Math.max(s.dcMinV(), b.endV()), s.minDcForAcPeakV(), "V", Check.Sense.AT_LEAST,
+                    "√2 × AC RMS ÷ maximum modulation index (transformerless bridge)"));
+        }
+        double usable = b.bankAh() * b.bankNominalV() * b.requirement().depthOfDischarge()
+                / (b.temperatureFactor() * b.agingFactor() * b.rateFactor());
+        checks.add(new Check("bank.energy", "Usable energy after depth of discharge, temperature, aging and rate",
+                usable, e.energyDcWh(), "Wh", Check.Sense.AT_LEAST, "battery sizing chain"));
+        return checks;
+    }
+
+    static List<Check> fireCode(BankDesign b, ProjectInput.BatteryLocation location) {
+        List<Check> out = new ArrayList<>();
+        double bankKwh = b.bankEnergyWh() / 1000.0;
+        out.add(new Check("code.unitKwh", "Energy of one battery module", b.module().energyWh() / 1000.0,
+                IRC_UNIT_LIMIT_KWH, "kWh", Check.Sense.AT_MOST, IRC_BASIS + ": individual units"));
+        if (location == null || location == ProjectInput.BatteryLocation.UTILITY_SPACE) {
+            out.add(new Check("code.utilityKwh", "Bank energy in a utility closet, basement or storage space", bankKwh,
+                    IRC_UTILITY_SPACE_LIMIT_KWH, "kWh", Check.Sense.AT_MOST, IRC_BASIS));
+        }
+        if (location == null || location == ProjectInput.BatteryLocation.GARAGE || location == ProjectInput.BatteryLocation.OUTDOORS) {
+            out.add(new Check("code.garageKwh", "Bank energy in a garage or outdoors", bankKwh,
+                    IRC_GARAGE_OUTDOOR_LIMIT_KWH, "kWh", Check.Sense.AT_MOST, IRC_BASIS));
+        }
+        return out;
+    }
+
+    static String fmt(double v) {
+        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+    }
+}

@@ -1,0 +1,57 @@
+package org.holdover.sizing;
+
+import java.util.List;
+import java.util.Objects;
+import org.holdover.battery.Chemistry;
+import org.holdover.catalog.Catalog;
+import org.holdover.load.LoadAnalysis;
+import org.holdover.project.Problem;
+import org.holdover.project.ProjectInput;
+
+/**
+ * Everything the sizing needs, defaults applied.
+ *
+ * @param name              project name
+ * @param mode              backup or off-grid
+ * @param acVoltsRms        service voltage (line to line), V
+ * @param frequencyHz       service frequency, Hz
+ * @param splitPhase        120/240 V split-phase service
+ * @param inverterAmbientC  design ambient around the inverter, °C
+ * @param batteryColdestC   coldest battery temperature, °C
+ * @param inverterMargin    continuous rating ≥ this × running demand
+ * @param maxBatteryCurrentA largest continuous battery current for the bus choice, A
+ * @param maxParallelRule   project cap on parallel strings (0: none)
+ * @param chemistry         chemistry to use, or null for any
+ * @param depthOfDischarge  override of the chemistry default, or null
+ * @param endOfLife         override of the chemistry default, or null
+ * @param location          battery location (fire-code limits), or null when not given
+ * @param outageHours       backup: outage to bridge, h
+ * @param autonomyDays      off-grid: days of autonomy
+ * @param loads             the load analysis
+ * @param catalog           component catalog
+ * @param assumptions       values used and their sources
+ * @param warnings          input warnings to show
+ * @param notes             user notes (text)
+ */
+public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms, double frequencyHz, boolean splitPhase,
+                          double inverterAmbientC, double batteryColdestC, double inverterMargin,
+                          double maxBatteryCurrentA, int maxParallelRule, Chemistry chemistry, Double depthOfDischarge,
+                          Double endOfLife, ProjectInput.BatteryLocation location, double outageHours,
+                          double autonomyDays, LoadAnalysis loads, Catalog catalog, List<Assumption> assumptions,
+                          List<Problem> warnings, List<String> notes) {
+    public SizingInput {
+        Objects.requireNonNull(name, "name");
+        Objects.requireNonNull(mode, "mode");
+        Objects.requireNonNull(loads, "loads");
+        Objects.requireNonNull(catalog, "catalog");
+        assumptions = List.copyOf(assumptions);
+        warnings = List.copyOf(warnings);
+        notes = List.copyOf(notes);
+        if (mode == ProjectInput.Mode.BACKUP && !(outageHours > 0)) {
+            throw new IllegalArgumentException("backup mode needs outage hours > 0");
+        }
+        if (mode == ProjectInput.Mode.OFF_GRID && !(autonomyDays > 0)) {
+            throw new IllegalArgumentException("off-grid mode needs autonomy days > 0");
+        }
+    }
+}

@@ -1,0 +1,46 @@
+package org.holdover.sizing;
+
+import java.util.List;
+import org.holdover.battery.BankDesign;
+import org.holdover.battery.BankRequirement;
+
+/**
+ * The outcome of sizing: every inverter and bus class with its checks, and the chosen system.
+ *
+ * @param input        what was sized
+ * @param inverters    every catalog inverter against the demand
+ * @param buses        every bus class, lowest first
+ * @param chosen       the bus option chosen, or null when none passes
+ * @param energy       the energy basis with the chosen inverter (null when none)
+ * @param requirement  what the chosen bank was sized for (null when none)
+ * @param checks       every check of the chosen system
+ * @param advisories   code limits that do not reject the design but must be looked at (fire-code energy limits)
+ * @param cecEfficiency     CEC weighted efficiency of the chosen inverter's loss model
+ * @param euroEfficiency    European weighted efficiency of the chosen inverter's loss model
+ */
+public record SizingResult(SizingInput input, List<InverterAssessment> inverters, List<BusOption> buses,
+                           BusOption chosen, EnergyBasis energy, BankRequirement requirement, List<Check> checks,
+                           List<Check> advisories, double cecEfficiency, double euroEfficiency) {
+
+    public SizingResult {
+        inverters = List.copyOf(inverters);
+        buses = List.copyOf(buses);
+        checks = List.copyOf(checks);
+        advisories = List.copyOf(advisories);
+    }
+
+    /** A system was found and every check passes. */
+    public boolean passes() {
+        return chosen != null && checks.stream().allMatch(Check::passes);
+    }
+
+    /** The chosen bank, or null. */
+    public BankDesign bank() {
+        return chosen == null ? null : chosen.bank();
+    }
+
+    /** The chosen inverter, or null. */
+    public InverterAssessment inverter() {
+        return chosen == null ? null : chosen.inverter();
+    }
+}
