@@ -13,7 +13,7 @@ package org.holdover.battery;
  *       discharging more slowly than the rated time (factor ≥ 1), common practice, no source;</li>
  *   <li>strings = the most of: rated capacity ÷ module Ah, continuous current ÷ module limit, surge
  *       current ÷ module surge limit (the continuous limit when the start outlasts the surge rating),
- *       each rounded up; a shortfall under one part in 10⁹ is treated as none, so that a spreadsheet
+ *       each rounded up; a shortfall under 10⁻⁹ of a unit is treated as none, so that a spreadsheet
  *       recomputing the chain rounds the same way.</li>
  * </ol>
  */
@@ -93,7 +93,7 @@ public final class BankSizing {
     }
 
     static int roundUp(double x) {
-        return (int) Math.ceil(x - ROUNDING_SLACK);
+        return Math.max(0, (int) Math.ceil(x - ROUNDING_SLACK));
     }
 
     private static String fmt(double v) {

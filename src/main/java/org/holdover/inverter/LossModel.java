@@ -53,6 +53,58 @@ public record LossModel(double ratedW, double p0, double k1, double k2) implemen
         return new LossModel(ratedW, p0, k.getEntry(0), k.getEntry(1));
     }
 
+    /**
+     * The least-squares fit written out as its normal equations, for a reader to check by hand: per point
+     * p, η, y = p·(1/η − 1) − p0, p², p³, p⁴, y·p, y·p²; the sums; and k1, k2 by Cramer's rule.
+     *
+     * @param p    load fractions
+     * @param eta  efficiencies
+     * @param y    loss above the no-load loss, per unit
+     * @param p2   p²
+     * @param p3   p³
+     * @param p4   p⁴
+     * @param yp   y·p
+     * @param yp2  y·p²
+     * @param sumP2 Σp²
+     * @param sumP3 Σp³
+     * @param sumP4 Σp⁴
+     * @param sumYp Σy·p
+     * @param sumYp2 Σy·p²
+     * @param det  Σp²·Σp⁴ − (Σp³)²
+     * @param k1   (Σy·p·Σp⁴ − Σp³·Σy·p²) ÷ det
+     * @param k2   (Σp²·Σy·p² − Σp³·Σy·p) ÷ det
+     */
+    public record NormalEquations(double[] p, double[] eta, double[] y, double[] p2, double[] p3, double[] p4,
+                                  double[] yp, double[] yp2, double sumP2, double sumP3, double sumP4, double sumYp,
+                                  double sumYp2, double det, double k1, double k2) {
+    }
+
+    /** The normal equations of the fit of k1 and k2 with p0 fixed. */
+    public static NormalEquations normalEquations(double p0, List<EfficiencyPoint> points) {
+        int n = points.size();
+        double[] p = new double[n], eta = new double[n], y = new double[n], p2 = new double[n], p3 = new double[n],
+                p4 = new double[n], yp = new double[n], yp2 = new double[n];
+        double s2 = 0, s3 = 0, s4 = 0, sy1 = 0, sy2 = 0;
+        for (int i = 0; i < n; i++) {
+            p[i] = points.get(i).loadFraction();
+            eta[i] = points.get(i).efficiency();
+            y[i] = p[i] * (1.0 / eta[i] - 1.0) - p0;
+            p2[i] = p[i] * p[i];
+            p3[i] = p2[i] * p[i];
+            p4[i] = p3[i] * p[i];
+            yp[i] = y[i] * p[i];
+            yp2[i] = y[i] * p2[i];
+            s2 += p2[i];
+            s3 += p3[i];
+            s4 += p4[i];
+            sy1 += yp[i];
+            sy2 += yp2[i];
+        }
+        double det = s2 * s4 - s3 * s3;
+        return new NormalEquations(p, eta, y, p2, p3, p4, yp, yp2, s2, s3, s4, sy1, sy2, det,
+                (sy1 * s4 - s3 * sy2) / det, (s2 * sy2 - s3 * sy1) / det);
+    }
+
     /** Loss at a per-unit output, per unit of the rating. */
     public double lossPu(double p) {
         return p0 + k1 * p + k2 * p * p;

@@ -7,13 +7,14 @@ package org.holdover.sizing;
  * @param monthlyDailyDcWh  mean DC energy per day in each month, Wh
  * @param worstMonth        month (1–12) with the highest DC energy per day
  * @param windowHours       backup: outage length in whole hours (0 off grid)
+ * @param windowDcWh        backup: DC energy of the window starting at each hour, Wh (empty off grid)
  * @param windowStartHour   backup: first hour of the hardest outage window (−1 off grid)
  * @param energyDcWh        energy the bank must deliver, Wh
  * @param dischargeHours    over how long, h
  * @param energyAcWh        AC energy served over the same period, Wh
  */
 public record EnergyBasis(double[] dcInputW, double[] monthlyDailyDcWh, int worstMonth, int windowHours,
-                          int windowStartHour, double energyDcWh, double dischargeHours, double energyAcWh) {
+                          double[] windowDcWh, int windowStartHour, double energyDcWh, double dischargeHours, double energyAcWh) {
 
     /** Effective inverter efficiency over the discharge (AC out ÷ DC in). */
     public double effectiveEfficiency() {

@@ -94,12 +94,15 @@ public final class ProjectAssembler {
         }
         double[] profileW = null;
         double profilePf = DEFAULT_PF_PROFILE;
+        double scale = 1.0;
+        boolean served = false;
         if (measured != null) {
-            boolean served = !backup || pr.critical() == null || pr.critical();
-            double scale = pr.scale() == null ? 1.0 : pr.scale();
+            served = !backup || pr.critical() == null || pr.critical();
+            scale = pr.scale() == null ? 1.0 : pr.scale();
+            double factor = served ? scale : 0.0;
             profileW = measured.hourlyW().clone();
             for (int h = 0; h < profileW.length; h++) {
-                profileW[h] = served ? profileW[h] * scale : 0.0;
+                profileW[h] = profileW[h] * factor;
             }
             profilePf = pr.powerFactor() == null ? DEFAULT_PF_PROFILE : pr.powerFactor();
             assumptions.add(new Assumption("Power factor of the measured profile", profilePf, "", given(pr.powerFactor()),
@@ -179,7 +182,8 @@ public final class ProjectAssembler {
         double days = backup ? 0 : p.offGrid().autonomyDays();
         return new SizingInput(p.name(), p.mode(), volts, site.ac().frequencyHz(), split, invAmbient, cold, margin, maxA,
                 maxParallel, chem, dod, eol, b == null ? null : b.location(), outage, days, loads, catalog, assumptions,
-                warnings, p.notes() == null ? List.of() : p.notes());
+                warnings, p.notes() == null ? List.of() : p.notes(), measured == null ? null : measured.hourlyW(), scale,
+                served);
     }
 
     private static String given(Object o) {

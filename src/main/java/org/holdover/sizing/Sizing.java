@@ -196,7 +196,7 @@ public final class Sizing {
     }
 
     static String incompatibility(BankDesign d, InverterSpec s) {
-        if (!d.feasible()) {
+        if (d.series() == 0) {
             return "";
         }
         if (d.absorptionV() > s.dcMaxV()) {
@@ -235,16 +235,18 @@ public final class Sizing {
         if (in.mode() == ProjectInput.Mode.OFF_GRID) {
             double e = in.autonomyDays() * monthly[worst - 1];
             double ac = in.autonomyDays() * la.figures().monthlyDailyEnergyWh()[worst - 1];
-            return new EnergyBasis(dc, monthly, worst, 0, -1, e, in.autonomyDays() * 24.0, ac);
+            return new EnergyBasis(dc, monthly, worst, 0, new double[0], -1, e, in.autonomyDays() * 24.0, ac);
         }
         int window = Math.min(n, (int) Math.ceil(in.outageHours() - 1e-9));
         double best = -1;
         int bestStart = 0;
+        double[] sums = new double[n - window + 1];
         for (int s = 0; s + window <= n; s++) {
             double sum = 0;
             for (int h = s; h < s + window; h++) {
                 sum += dc[h];
             }
+            sums[s] = sum;
             if (sum > best) {
                 best = sum;
                 bestStart = s;
@@ -254,7 +256,7 @@ public final class Sizing {
         for (int h = bestStart; h < bestStart + window; h++) {
             ac += la.loadW()[h];
         }
-        return new EnergyBasis(dc, monthly, worst, window, bestStart, best, window, ac);
+        return new EnergyBasis(dc, monthly, worst, window, sums, bestStart, best, window, ac);
     }
 
     static List<Check> bankChecks(BankDesign b, InverterSpec s, EnergyBasis e) {

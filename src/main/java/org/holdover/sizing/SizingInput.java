@@ -32,13 +32,17 @@ import org.holdover.project.ProjectInput;
  * @param assumptions       values used and their sources
  * @param warnings          input warnings to show
  * @param notes             user notes (text)
+ * @param measuredW         the measured profile as read, W per hour, or null
+ * @param profileScale      scale applied to it
+ * @param profileServed     whether the profile's loads are served (backup: critical)
  */
 public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms, double frequencyHz, boolean splitPhase,
                           double inverterAmbientC, double batteryColdestC, double inverterMargin,
                           double maxBatteryCurrentA, int maxParallelRule, Chemistry chemistry, Double depthOfDischarge,
                           Double endOfLife, ProjectInput.BatteryLocation location, double outageHours,
                           double autonomyDays, LoadAnalysis loads, Catalog catalog, List<Assumption> assumptions,
-                          List<Problem> warnings, List<String> notes) {
+                          List<Problem> warnings, List<String> notes, double[] measuredW,
+                          double profileScale, boolean profileServed) {
     public SizingInput {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(mode, "mode");

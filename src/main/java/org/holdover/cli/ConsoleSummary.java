@@ -1,0 +1,69 @@
+package org.holdover.cli;
+
+import java.io.PrintWriter;
+import java.util.Locale;
+import org.holdover.battery.BankDesign;
+import org.holdover.load.LoadAnalysis;
+import org.holdover.project.Problem;
+import org.holdover.report.Cautions;
+import org.holdover.sizing.BusOption;
+import org.holdover.sizing.Check;
+import org.holdover.sizing.SizingResult;
+
+/** The short console summary of a sizing. Presents the engine's numbers; computes none. */
+final class ConsoleSummary {
+
+    private ConsoleSummary() {
+    }
+
+    static void print(SizingResult r, PrintWriter out, PrintWriter err) {
+        for (Problem w : r.input().warnings()) {
+            err.println("warning: " + w.oneLine());
+        }
+        err.flush();
+        LoadAnalysis.Figures f = r.input().loads().figures();
+        out.println(r.input().name());
+        out.printf(Locale.ROOT, "  loads: %,.0f Wh/day served (year mean); running demand %,.0f W / %,.0f VA", f.dailyEnergyWh(),
+                f.runningPeakW(), f.runningPeakVa());
+        if (!r.input().loads().starting().isEmpty()) {
+            out.printf(Locale.ROOT, "; surge %,.0f VA for %.1f s", f.surgeVa(), f.surgeS());
+        }
+        out.println();
+        if (r.chosen() == null) {
+            out.println("  NO SYSTEM in the catalog passes every check:");
+            for (BusOption b : r.buses()) {
+                out.printf(Locale.ROOT, "    %4.0f V bus: %s%n", b.busClassV(), b.reason());
+            }
+        } else {
+            BankDesign b = r.bank();
+            out.printf(Locale.ROOT, "  bus: %.0f V    inverter: %s (%s)%n", r.chosen().busClassV(), r.inverter().spec().id(),
+                    r.inverter().spec().description());
+            out.printf(Locale.ROOT, "  battery: %d × %s (%d in series × %d strings), %.1f kWh rated at %.1f V%n",
+                    b.modules(), b.module().id(), b.series(), b.strings(), b.bankEnergyWh() / 1000.0, b.bankNominalV());
+            out.printf(Locale.ROOT, "  battery must deliver %,.0f Wh DC over %.0f h (inverter %.1f %% efficient over it, idle draw included)%n",
+                    r.energy().energyDcWh(), r.energy().dischargeHours(), 100 * r.energy().effectiveEfficiency());
+            for (BusOption o : r.buses()) {
+                if (o != r.chosen()) {
+                    out.printf(Locale.ROOT, "    %4.0f V bus: %s%n", o.busClassV(), o.reason());
+                }
+            }
+            out.println("  checks:");
+            for (Check c : r.checks()) {
+                out.printf(Locale.ROOT, "    %-4s %-66s %12s %s %-12s (margin %+.0f %%)%n", c.passes() ? "pass" : "FAIL",
+                        c.label(), num(c.value()), c.sense() == Check.Sense.AT_LEAST ? ">=" : "<=",
+                        num(c.limit()) + " " + c.unit(), 100 * c.margin());
+            }
+            for (Check c : r.advisories()) {
+                if (!c.passes()) {
+                    out.printf(Locale.ROOT, "  code limit to look at: %s %s %s above %s %s (%s)%n", c.label(), num(c.value()),
+                            c.unit(), num(c.limit()), c.unit(), c.basis());
+                }
+            }
+        }
+        out.println(Cautions.SHORT);
+    }
+
+    private static String num(double v) {
+        return Math.abs(v) >= 100 ? String.format(Locale.ROOT, "%,.0f", v) : String.format(Locale.ROOT, "%.2f", v);
+    }
+}

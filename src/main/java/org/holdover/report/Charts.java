@@ -1,0 +1,128 @@
+package org.holdover.report;
+
+import org.apache.poi.xddf.usermodel.PresetColor;
+import org.apache.poi.xddf.usermodel.XDDFColor;
+import org.apache.poi.xddf.usermodel.XDDFLineProperties;
+import org.apache.poi.xddf.usermodel.XDDFShapeProperties;
+import org.apache.poi.xddf.usermodel.XDDFSolidFillProperties;
+import org.apache.poi.xddf.usermodel.chart.AxisCrosses;
+import org.apache.poi.xddf.usermodel.chart.AxisPosition;
+import org.apache.poi.xddf.usermodel.chart.BarDirection;
+import org.apache.poi.xddf.usermodel.chart.ChartTypes;
+import org.apache.poi.xddf.usermodel.chart.LegendPosition;
+import org.apache.poi.xddf.usermodel.chart.MarkerStyle;
+import org.apache.poi.xddf.usermodel.chart.XDDFBarChartData;
+import org.apache.poi.xddf.usermodel.chart.XDDFCategoryAxis;
+import org.apache.poi.xddf.usermodel.chart.XDDFChartData;
+import org.apache.poi.xddf.usermodel.chart.XDDFChartLegend;
+import org.apache.poi.xddf.usermodel.chart.XDDFDataSource;
+import org.apache.poi.xddf.usermodel.chart.XDDFDataSourcesFactory;
+import org.apache.poi.xddf.usermodel.chart.XDDFNumericalDataSource;
+import org.apache.poi.xddf.usermodel.chart.XDDFScatterChartData;
+import org.apache.poi.xddf.usermodel.chart.XDDFValueAxis;
+import org.apache.poi.xddf.usermodel.chart.ScatterStyle;
+import org.apache.poi.xssf.streaming.SXSSFSheet;
+import org.apache.poi.xssf.usermodel.XSSFChart;
+import org.apache.poi.xssf.usermodel.XSSFClientAnchor;
+import org.apache.poi.xssf.usermodel.XSSFDrawing;
+import org.holdover.inverter.InverterSpec;
+import org.holdover.inverter.LossModel;
+import org.holdover.load.LoadAnalysis;
+
+/**
+ * Charts. Series carry the engine's numbers as their cache and point at the cells that hold them, so a
+ * viewer shows them without recalculating and a spreadsheet application redraws them from the cells.
+ */
+final class Charts {
+
+    private Charts() {
+    }
+
+    private static XSSFDrawing drawing(SheetWriter s) {
+        SXSSFSheet sheet = (SXSSFSheet) s.sheet;
+        sheet.createDrawingPatriarch();
+        return sheet.getDrawingPatriarch();
+    }
+
+    /** Bar chart of served energy per day, by month (Loads sheet, month rows starting at {@code firstRow}). */
+    static void monthlyEnergy(Context ctx, SheetWriter s, int firstRow, int anchorRow) {
+        LoadAnalysis.Figures f = ctx.r.input().loads().figures();
+        XSSFDrawing d = drawing(s);
+        XSSFClientAnchor anchor = d.createAnchor(0, 0, 0, 0, 4, firstRow - 2, 14, firstRow + 16);
+        XSSFChart chart = d.createChart(anchor);
+        chart.setTitleText("Served energy per day, by month (Wh per day)");
+        chart.setTitleOverlay(false);
+        XDDFCategoryAxis x = chart.createCategoryAxis(AxisPosition.BOTTOM);
+        XDDFValueAxis y = chart.createValueAxis(AxisPosition.LEFT);
+        y.setCrosses(AxisCrosses.AUTO_ZERO);
+        y.setTitle("Wh per day");
+        String[] months = LoadsSheet.MONTHS.clone();
+        Double[] values = new Double[12];
+        for (int m = 0; m < 12; m++) {
+            values[m] = f.monthlyDailyEnergyWh()[m];
+        }
+        XDDFDataSource<String> cats = XDDFDataSourcesFactory.fromArray(months,
+                s.ref(firstRow, 0, firstRow + 11, 0), 0);
+        XDDFNumericalDataSource<Double> vals = XDDFDataSourcesFactory.fromArray(values,
+                s.ref(firstRow, 2, firstRow + 11, 2), 2);
+        XDDFBarChartData data = (XDDFBarChartData) chart.createData(ChartTypes.BAR, x, y);
+        data.setBarDirection(BarDirection.COL);
+        XDDFChartData.Series series = data.addSeries(cats, vals);
+        series.setTitle("Wh per day", null);
+        XDDFShapeProperties props = new XDDFShapeProperties();
+        props.setFillProperties(new XDDFSolidFillProperties(XDDFColor.from(PresetColor.STEEL_BLUE)));
+        series.setShapeProperties(props);
+        chart.plot(data);
+    }
+
+    /** Efficiency against load: the catalog points and the fitted model (Inverter curves sheet). */
+    static void efficiency(Context ctx, SheetWriter s, InverterSpec spec, int firstPoint, int lastPoint, int anchorRow) {
+        LossModel loss = spec.loss();
+        int n = lastPoint - firstPoint + 1;
+        Double[] px = new Double[n];
+        Double[] py = new Double[n];
+        Double[] my = new Double[n];
+        for (int i = 0; i < n; i++) {
+            px[i] = spec.efficiencyPoints().get(i).loadFraction();
+            py[i] = spec.efficiencyPoints().get(i).efficiency();
+            my[i] = loss.efficiency(px[i]);
+        }
+        XSSFDrawing d = drawing(s);
+        XSSFClientAnchor anchor = d.createAnchor(0, 0, 0, 0, 11, firstPoint - 8, 19, firstPoint + 12);
+        XSSFChart chart = d.createChart(anchor);
+        chart.setTitleText("Chosen inverter: efficiency against load (points and fitted model)");
+        chart.setTitleOverlay(false);
+        XDDFChartLegend legend = chart.getOrAddLegend();
+        legend.setPosition(LegendPosition.BOTTOM);
+        XDDFValueAxis x = chart.createValueAxis(AxisPosition.BOTTOM);
+        x.setTitle("Load, fraction of rating");
+        XDDFValueAxis y = chart.createValueAxis(AxisPosition.LEFT);
+        y.setTitle("Efficiency");
+        y.setCrosses(AxisCrosses.AUTO_ZERO);
+        XDDFNumericalDataSource<Double> xs = XDDFDataSourcesFactory.fromArray(px, s.ref(firstPoint, 1, lastPoint, 1), 1);
+        XDDFNumericalDataSource<Double> ys = XDDFDataSourcesFactory.fromArray(py, s.ref(firstPoint, 2, lastPoint, 2), 2);
+        XDDFNumericalDataSource<Double> ms = XDDFDataSourcesFactory.fromArray(my, s.ref(firstPoint, 9, lastPoint, 9), 9);
+        XDDFScatterChartData data = (XDDFScatterChartData) chart.createData(ChartTypes.SCATTER, x, y);
+        data.setStyle(ScatterStyle.LINE_MARKER);
+        XDDFScatterChartData.Series points = (XDDFScatterChartData.Series) data.addSeries(xs, ys);
+        points.setTitle("Catalog points", null);
+        points.setMarkerStyle(MarkerStyle.CIRCLE);
+        points.setSmooth(false);
+        XDDFShapeProperties none = new XDDFShapeProperties();
+        XDDFLineProperties noLine = new XDDFLineProperties();
+        noLine.setFillProperties(new org.apache.poi.xddf.usermodel.XDDFNoFillProperties());
+        none.setLineProperties(noLine);
+        points.setShapeProperties(none);
+        XDDFScatterChartData.Series model = (XDDFScatterChartData.Series) data.addSeries(xs, ms);
+        model.setTitle("Loss model", null);
+        model.setMarkerStyle(MarkerStyle.NONE);
+        model.setSmooth(false);
+        XDDFShapeProperties line = new XDDFShapeProperties();
+        XDDFLineProperties lp = new XDDFLineProperties();
+        lp.setFillProperties(new XDDFSolidFillProperties(XDDFColor.from(PresetColor.DARK_ORANGE)));
+        lp.setWidth(2.0);
+        line.setLineProperties(lp);
+        model.setShapeProperties(line);
+        chart.plot(data);
+    }
+}

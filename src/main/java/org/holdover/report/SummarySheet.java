@@ -1,0 +1,185 @@
+package org.holdover.report;
+
+import java.util.List;
+import java.util.Locale;
+import org.holdover.battery.BankDesign;
+import org.holdover.load.LoadAnalysis;
+import org.holdover.project.Problem;
+import org.holdover.sizing.BusOption;
+import org.holdover.sizing.Check;
+import org.holdover.sizing.SizingResult;
+
+/** The first sheet: the chosen system, every check with its margin, code limits, warnings and cautions. */
+final class SummarySheet {
+
+    private SummarySheet() {
+    }
+
+    static void write(Context ctx, int bankRow) {
+        SheetWriter s = ctx.sheet(Context.SUMMARY);
+        SizingResult r = ctx.r;
+        s.widths(46, 14, 14, 8, 9, 10, 70);
+        int row = 0;
+        s.text(row++, 0, "Sizing summary: " + r.input().name(), ctx.styles.title);
+        s.text(row++, 0, (ctx.backup() ? "Backup system" : "Off-grid system") + ", " + service(ctx)
+                + ". Yellow cells are inputs; every other number is a live formula you can trace.", ctx.styles.note);
+        if (r.input().catalog().demoData()) {
+            s.text(row++, 0, "DEMO DATA: the components come from the built-in catalog of invented, generic units. Not a quote.", ctx.styles.bold);
+        }
+        row++;
+        if (r.chosen() == null) {
+            s.text(row++, 0, "No system in the catalog passes every check.", ctx.styles.bold);
+            for (BusOption b : r.buses()) {
+                s.text(row, 0, (long) b.busClassV() + " V bus");
+                s.text(row++, 1, b.reason());
+            }
+        } else {
+            row = system(ctx, s, row, bankRow);
+        }
+        row++;
+        s.text(row++, 0, "Loads", ctx.styles.subtitle);
+        LoadAnalysis.Figures f = r.input().loads().figures();
+        row = ref(s, row, "Served energy per day, year mean", "DailyWh", f.dailyEnergyWh(), "Wh/day", Styles.INT);
+        row = ref(s, row, "Coincident running demand", "RunPeakW", f.runningPeakW(), "W", Styles.INT);
+        row = ref(s, row, "Coincident running demand", "RunPeakVA", f.runningPeakVa(), "VA", Styles.INT);
+        if (ctx.hasMotors()) {
+            row = ref(s, row, "Surge while the largest motor(s) start", "SurgeVA", f.surgeVa(), "VA", Styles.INT);
+            row = ref(s, row, "…lasting", "SurgeS", f.surgeS(), "s", Styles.D2);
+        }
+        if (r.chosen() != null) {
+            row = ref(s, row, "DC energy the battery must deliver", "EnergyDcWh", r.energy().energyDcWh(), "Wh", Styles.INT);
+            row = ref(s, row, "Inverter efficiency over that discharge (idle draw included)", "EffectiveEff",
+                    r.energy().effectiveEfficiency(), "", Styles.PCT);
+            s.text(row, 0, "Chosen inverter: CEC / European weighted efficiency");
+            int invRow = InvertersSheet.FIRST + r.inverters().indexOf(r.inverter());
+            s.formula(row, 1, ctx.sheet(Context.INVERTERS).ref(invRow, InvertersSheet.CEC), r.cecEfficiency(), Styles.PCT);
+            s.formula(row++, 2, ctx.sheet(Context.INVERTERS).ref(invRow, InvertersSheet.EURO), r.euroEfficiency(), Styles.PCT);
+        }
+
+        if (r.chosen() != null) {
+            row++;
+            s.text(row++, 0, "Checks", ctx.styles.subtitle);
+            s.header(row++, 0, "Check", "Design value", "Limit", "Unit", "Result", "Margin", "Basis");
+            int firstCheck = row;
+            for (Check c : r.checks()) {
+                row = check(ctx, s, row, c, bankRow);
+            }
+            s.text(row, 0, "Overall", ctx.styles.bold);
+            s.formulaText(row++, 4, "IF(COUNTIF(" + SheetWriter.addr(firstCheck, 4) + ":" + SheetWriter.addr(row - 2, 4)
+                    + ",\"FAIL\")=0,\"pass\",\"FAIL\")", r.passes() ? "pass" : "FAIL");
+            row++;
+            s.text(row++, 0, "Code limits to look at (they do not reject the design; the authority having jurisdiction decides)", ctx.styles.subtitle);
+            s.header(row++, 0, "Limit", "Design value", "Limit", "Unit", "Result", "Margin", "Basis");
+            for (Check c : r.advisories()) {
+                row = check(ctx, s, row, c, bankRow);
+            }
+        }
+        List<Problem> warnings = r.input().warnings();
+        if (!warnings.isEmpty()) {
+            row++;
+            s.text(row++, 0, "Input warnings", ctx.styles.subtitle);
+            for (Problem p : warnings) {
+                s.text(row++, 0, p.oneLine());
+            }
+        }
+        if (!r.input().notes().isEmpty()) {
+            row++;
+            s.text(row++, 0, "Notes", ctx.styles.subtitle);
+            for (String n : r.input().notes()) {
+                s.text(row++, 0, n);
+            }
+        }
+        row++;
+        s.text(row++, 0, "Cautions (in full on the Cautions sheet)", ctx.styles.subtitle);
+        for (String c : Cautions.LINES) {
+            s.text(row, 0, c, ctx.styles.wrap);
+            s.sheet.addMergedRegion(new org.apache.poi.ss.util.CellRangeAddress(row, row, 0, 6));
+            s.sheet.getRow(row).setHeightInPoints(32);
+            row++;
+        }
+    }
+
+    private static String service(Context ctx) {
+        return ctx.split() ? "120/240 V split phase, " + (long) ctx.r.input().frequencyHz() + " Hz"
+                : (long) ctx.r.input().acVoltsRms() + " V single phase, " + (long) ctx.r.input().frequencyHz() + " Hz";
+    }
+
+    private static int system(Context ctx, SheetWriter s, int row, int bankRow) {
+        SizingResult r = ctx.r;
+        BankDesign b = r.bank();
+        SheetWriter bat = ctx.sheet(Context.BATTERY);
+        s.text(row++, 0, "The system", ctx.styles.subtitle);
+        s.text(row, 0, "DC bus voltage class, V");
+        s.formula(row++, 1, "ChosenBusV", r.chosen().busClassV(), Styles.INT);
+        s.text(row, 0, "Inverter");
+        s.formulaText(row, 1, "ChosenInvRow", r.inverter().spec().id());
+        s.text(row++, 2, r.inverter().spec().description());
+        s.text(row, 0, "Battery module");
+        s.formulaText(row, 1, bat.ref(bankRow, BatterySheet.ID), b.module().id());
+        s.text(row++, 2, b.module().description());
+        s.text(row, 0, "Modules in series × parallel strings");
+        s.formula(row, 1, bat.ref(bankRow, BatterySheet.SERIES), b.series(), Styles.INT);
+        s.formula(row++, 2, bat.ref(bankRow, BatterySheet.STRINGS), b.strings(), Styles.INT);
+        s.text(row, 0, "Bank nominal V; rated kWh");
+        s.formula(row, 1, bat.ref(bankRow, BatterySheet.BANK_V), b.bankNominalV(), Styles.D1);
+        s.formula(row++, 2, bat.ref(bankRow, BatterySheet.KWH), b.bankEnergyWh() / 1000.0, Styles.D2);
+        s.text(row, 0, "Demo price: inverter + bank");
+        int invRow = InvertersSheet.FIRST + r.inverters().indexOf(r.inverter());
+        s.formula(row++, 1, ctx.sheet(Context.INVERTERS).ref(invRow, InvertersSheet.PRICE) + "+" + bat.ref(bankRow, BatterySheet.COST),
+                r.inverter().spec().price() + b.price(), Styles.INT);
+        return row;
+    }
+
+    private static int ref(SheetWriter s, int row, String label, String name, double value, String unit, String format) {
+        s.text(row, 0, label);
+        s.formula(row, 1, name, value, format);
+        s.text(row, 3, unit);
+        return row + 1;
+    }
+
+    private static int check(Context ctx, SheetWriter s, int row, Check c, int bankRow) {
+        String[] f = formulas(ctx, c, bankRow);
+        String R = String.valueOf(row + 1);
+        s.text(row, 0, c.label());
+        s.formula(row, 1, f[0], c.value(), format(c));
+        s.formula(row, 2, f[1], c.limit(), format(c));
+        s.text(row, 3, c.unit());
+        boolean atLeast = c.sense() == Check.Sense.AT_LEAST;
+        s.formulaText(row, 4, "IF(B" + R + (atLeast ? ">=" : "<=") + "C" + R + ",\"pass\",\"FAIL\")", c.passes() ? "pass" : "FAIL");
+        s.formula(row, 5, atLeast ? "B" + R + "/C" + R + "-1" : "1-B" + R + "/C" + R, c.margin(), Styles.PCT);
+        s.text(row, 6, c.basis());
+        return row + 1;
+    }
+
+    private static String format(Check c) {
+        return c.unit().equals("strings") ? Styles.INT : Math.abs(c.limit()) >= 100 ? Styles.INT : Styles.D2;
+    }
+
+    /** Formulas for a check's value and limit, pointing at the cells where they are computed. */
+    private static String[] formulas(Context ctx, Check c, int bankRow) {
+        SheetWriter inv = ctx.sheet(Context.INVERTERS);
+        SheetWriter bat = ctx.sheet(Context.BATTERY);
+        int i = InvertersSheet.FIRST + ctx.r.inverters().indexOf(ctx.r.inverter());
+        java.util.function.IntFunction<String> I = col -> inv.ref(i, col);
+        java.util.function.IntFunction<String> B = col -> bat.ref(bankRow, col);
+        return switch (c.id()) {
+            case "inverter.continuousW" -> new String[] {I.apply(InvertersSheet.AVAIL_W), I.apply(InvertersSheet.REQ_W)};
+            case "inverter.continuousVa" -> new String[] {I.apply(InvertersSheet.AVAIL_VA), I.apply(InvertersSheet.REQ_VA)};
+            case "inverter.surgeVa" -> new String[] {I.apply(InvertersSheet.AVAIL_SURGE), I.apply(InvertersSheet.REQ_SURGE)};
+            case "inverter.legVa" -> new String[] {I.apply(InvertersSheet.AVAIL_LEG), I.apply(InvertersSheet.REQ_LEG)};
+            case "inverter.legSurgeVa" -> new String[] {I.apply(InvertersSheet.AVAIL_LEG_SURGE), I.apply(InvertersSheet.REQ_LEG_SURGE)};
+            case "bus.continuousA" -> new String[] {I.apply(InvertersSheet.DC_A), "MaxBatteryA"};
+            case "bank.strings" -> new String[] {B.apply(BatterySheet.STRINGS), B.apply(BatterySheet.PAR_LIMIT)};
+            case "bank.continuousA" -> new String[] {"ContA/" + B.apply(BatterySheet.STRINGS), B.apply(BatterySheet.CONT)};
+            case "bank.surgeA" -> new String[] {"SurgeA/" + B.apply(BatterySheet.STRINGS),
+                "IF(StartS<=" + B.apply(BatterySheet.SURGE_S) + "," + B.apply(BatterySheet.SURGE) + "," + B.apply(BatterySheet.CONT) + ")"};
+            case "bank.chargeV" -> new String[] {B.apply(BatterySheet.ABS_V), "InvDcMaxV"};
+            case "inverter.acPeak" -> new String[] {"MAX(InvDcMinV," + B.apply(BatterySheet.END_V) + ")", "MinDcForPeakV"};
+            case "bank.energy" -> new String[] {B.apply(BatterySheet.USABLE), "EnergyDcWh"};
+            case "code.unitKwh" -> new String[] {B.apply(BatterySheet.MOD_V) + "*" + B.apply(BatterySheet.AH) + "/1000", "CodeUnitKwh"};
+            case "code.utilityKwh" -> new String[] {B.apply(BatterySheet.KWH), "CodeUtilityKwh"};
+            case "code.garageKwh" -> new String[] {B.apply(BatterySheet.KWH), "CodeGarageKwh"};
+            default -> throw new IllegalStateException("no workbook cells for check " + c.id() + " (" + c.label().toLowerCase(Locale.ROOT) + ")");
+        };
+    }
+}
