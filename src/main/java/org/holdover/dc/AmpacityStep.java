@@ -22,7 +22,8 @@ package org.holdover.dc;
  *                               the table
  * @param parallelSets           conductors per pole, ≥ 1
  * @param correctedAmpacityA     sets × table × ambient × adjustment, A
- * @param uncorrectedLimitA      sets × the lower of insulation and terminal table ampacities, A (IEC: sets × table)
+ * @param uncorrectedLimitA      NEC: sets × the lower of the insulation and terminal table ampacities, A. IEC has
+ *                               no separate uncorrected limit: equal to {@code correctedAmpacityA}.
  * @param allowableAmpacityA     the ampacity to protect: NEC min(corrected, uncorrected limit); IEC corrected, A
  * @param requiredTableAmpacityA per conductor, the insulation-column table value that would just carry the
  *                               conditions-of-use current: current ÷ (ambient × adjustment × sets), A (infinite

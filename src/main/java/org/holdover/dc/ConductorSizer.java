@@ -137,7 +137,7 @@ public final class ConductorSizer {
         double corrected = sets * table * ka * kg;
         double required = ka * kg > 0 ? design / (ka * kg * sets) : Double.POSITIVE_INFINITY;
         boolean ok = corrected >= design - OvercurrentProtection.TOLERANCE_A;
-        return new AmpacityStep(design, design, ins, table, ins, table, ka, kg, sets, corrected, sets * table,
+        return new AmpacityStep(design, design, ins, table, ins, table, ka, kg, sets, corrected, corrected,
                 corrected, required, ok);
     }
 

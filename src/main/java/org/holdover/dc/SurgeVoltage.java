@@ -22,13 +22,18 @@ public final class SurgeVoltage {
         double discriminant = voc * voc - 4.0 * p * r;
         if (discriminant < 0) {
             double pMax = voc * voc / (4.0 * r);
-            return new SurgeResult.Collapse(input, pMax, voc / (2.0 * r), voc / 2.0, p - pMax);
+            if (p > pMax) {
+                return new SurgeResult.Collapse(input, pMax, voc / (2.0 * r), voc / 2.0, p - pMax);
+            }
+            // P equals the maximum power to within rounding: the maximum-power point itself.
+            discriminant = 0.0;
         }
-        double vInverter = (voc + Math.sqrt(discriminant)) / 2.0;
-        // I = P / V avoids the cancellation in (V_oc − √D) / (2R) when P·R is small, and works for R = 0.
-        double current = p / vInverter;
+        // I = 2P / (V_oc + √D) is the smaller root written without the cancellation in (V_oc − √D) / (2R), and
+        // works for R = 0. The voltages then follow from Kirchhoff's law, so V_bat ≥ V_inv holds exactly.
+        double current = 2.0 * p / (voc + Math.sqrt(discriminant));
         double bankDrop = current * input.bankResistanceOhm();
         double cableDrop = current * input.cableRoundTripResistanceOhm();
+        double vInverter = voc - current * r;
         double margin = vInverter - input.lowVoltageCutoffV();
         return new SurgeResult.Operating(input, voc - bankDrop, vInverter, current, bankDrop, cableDrop, margin,
                 100.0 * margin / input.lowVoltageCutoffV(), current / input.peakCurrentLimitA());
