@@ -58,31 +58,46 @@ public record ConductorRequest(String circuitName, double continuousCurrentA, Cu
                 oneWayLengthM, maxVoltageDropPct, Installation.nec75(30.0), 1, false);
     }
 
-    /** @return a copy with these factors */
+    /**
+     * @param f code multipliers
+     * @return a copy with them
+     */
     public ConductorRequest withFactors(CurrentFactors f) {
         return new ConductorRequest(circuitName, continuousCurrentA, f, nominalV, oneWayLengthM, maxVoltageDropPct,
                 installation, maxParallelSets, fineStranded);
     }
 
-    /** @return a copy with this installation */
+    /**
+     * @param i the installation
+     * @return a copy with it
+     */
     public ConductorRequest withInstallation(Installation i) {
         return new ConductorRequest(circuitName, continuousCurrentA, factors, nominalV, oneWayLengthM,
                 maxVoltageDropPct, i, maxParallelSets, fineStranded);
     }
 
-    /** @return a copy allowing up to this many parallel sets */
+    /**
+     * @param sets most conductors per pole, ≥ 1
+     * @return a copy allowing that many parallel sets
+     */
     public ConductorRequest withMaxParallelSets(int sets) {
         return new ConductorRequest(circuitName, continuousCurrentA, factors, nominalV, oneWayLengthM,
                 maxVoltageDropPct, installation, sets, fineStranded);
     }
 
-    /** @return a copy with the fine-stranded flag set as given */
+    /**
+     * @param fine true for fine-stranded (flexible) conductors
+     * @return a copy with the flag set
+     */
     public ConductorRequest withFineStranded(boolean fine) {
         return new ConductorRequest(circuitName, continuousCurrentA, factors, nominalV, oneWayLengthM,
                 maxVoltageDropPct, installation, maxParallelSets, fine);
     }
 
-    /** @return a copy with this one-way length, m */
+    /**
+     * @param lengthM one-way length, m, &gt; 0
+     * @return a copy with that length
+     */
     public ConductorRequest withOneWayLengthM(double lengthM) {
         return new ConductorRequest(circuitName, continuousCurrentA, factors, nominalV, lengthM, maxVoltageDropPct,
                 installation, maxParallelSets, fineStranded);

@@ -68,6 +68,13 @@ public final class ConductorSizer {
                 if (pick.parallelSets() > 1) {
                     notes.add(parallelNote(inst.system()));
                 }
+                if (inst.system() == TableSystem.NEC && inst.terminalTempC() > 60
+                        && (ratedDevice(pick).ratingA() <= 100.0 || tables.indexOf(pick.size())
+                                <= tables.indexOf(tables.sizeOrThrow(TableSystem.NEC, "1 AWG")))) {
+                    notes.add("From memory, NEC 110.14(C)(1)(a): terminations of circuits rated 100 A or less, or "
+                            + "marked for 14 to 1 AWG, are 60 °C unless the equipment is listed and marked for "
+                            + inst.terminalTempC() + " °C; check the equipment's marking.");
+                }
                 return new ConductorSelection.Sized(request, pick, governing, round.get(byAmpacity).size(),
                         round.get(byDrop).size(), all, notes);
             }
@@ -102,6 +109,9 @@ public final class ConductorSizer {
     /**
      * True when the size may be run in parallel: NEC 310.10(G) 1/0 AWG and larger. IEC: any size (IEC
      * 60364-5-52 523.7 sets conditions on equal current sharing rather than a minimum size; from memory).
+     *
+     * @param size a tabulated size
+     * @return whether more than one set per pole is allowed
      */
     public boolean parallelAllowed(ConductorSize size) {
         if (size.system() == TableSystem.IEC) {
@@ -150,8 +160,7 @@ public final class ConductorSizer {
                     inst.conductorTempC(), conductorTempReason(inst)));
             notes.add("Terminations: the uncorrected ampacity is taken at the lower of the insulation ("
                     + inst.insulationTempC() + " °C) and terminal (" + inst.terminalTempC() + " °C) columns "
-                    + "(NEC 110.14(C)). From memory: 110.14(C)(1)(a) treats terminals of circuits of 100 A or "
-                    + "less, or for 14 to 1 AWG, as 60 °C unless the equipment is listed and marked for 75 °C.");
+                    + "(NEC 110.14(C)).");
             if (tables.necAmbientFactor(inst.ambientC(), inst.insulationTempC()).isEmpty()) {
                 notes.add(String.format(Locale.ROOT, "Table 310.15(B)(1)(1) does not permit %d °C insulation at "
                         + "%.1f °C ambient.", inst.insulationTempC(), inst.ambientC()));
@@ -182,6 +191,10 @@ public final class ConductorSizer {
             }
         }
         return notes;
+    }
+
+    private static OvercurrentDevice.Rated ratedDevice(CandidateEvaluation passing) {
+        return (OvercurrentDevice.Rated) passing.device();
     }
 
     private static String conductorTempReason(Installation inst) {
@@ -234,7 +247,11 @@ public final class ConductorSizer {
         return -1;
     }
 
-    /** @return the ambient factor used for a request (NEC or IEC table), or empty when not permitted */
+    /**
+     * @param inst an installation
+     * @return the ambient factor its table gives (NEC 310.15(B)(1)(1) or IEC B.52.14), or empty when the
+     *         insulation is not permitted at that ambient
+     */
     public OptionalDouble ambientFactor(Installation inst) {
         return inst.system() == TableSystem.NEC
                 ? tables.necAmbientFactor(inst.ambientC(), inst.insulationTempC())

@@ -454,13 +454,20 @@ public final class ConductorTables {
         return sizes(system).stream().filter(s -> s.label().equals(label)).findFirst();
     }
 
-    /** @return the size with the given label; throws {@link IllegalArgumentException} when there is none */
+    /**
+     * @param system the table family
+     * @param label  the size label
+     * @return the size; throws {@link IllegalArgumentException} when there is none
+     */
     public ConductorSize sizeOrThrow(TableSystem system, String label) {
         return size(system, label).orElseThrow(
                 () -> new IllegalArgumentException("no " + system + " size " + label + "; sizes: " + sizes(system)));
     }
 
-    /** @return the 0-based position of the size in {@link #sizes(TableSystem)} */
+    /**
+     * @param size a tabulated size
+     * @return its 0-based position in {@link #sizes(TableSystem)} (larger index, larger area)
+     */
     public int indexOf(ConductorSize size) {
         int i = sizes(size.system()).indexOf(size);
         if (i < 0) {
@@ -571,12 +578,18 @@ public final class ConductorTables {
         };
     }
 
-    /** @return the conductor temperature of the resistance table, °C (NEC 75, IEC 20) */
+    /**
+     * @param system the table family
+     * @return the conductor temperature of its resistance table, °C (NEC 75, IEC 20)
+     */
     public static double referenceTemperatureC(TableSystem system) {
         return system == TableSystem.NEC ? NEC_TABLE8_REFERENCE_C : IEC_60228_REFERENCE_C;
     }
 
-    /** @return the temperature coefficient at 20 °C the system's table uses, per °C (NEC 0.00393, IEC 0.004) */
+    /**
+     * @param system the table family
+     * @return the temperature coefficient at 20 °C its table uses, per °C (NEC 0.00393, IEC 0.004)
+     */
     public static double alpha20PerC(TableSystem system) {
         return system == TableSystem.NEC ? COPPER_ALPHA_20C_PER_C : IEC_60228_ALPHA_20C_PER_C;
     }

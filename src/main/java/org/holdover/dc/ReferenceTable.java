@@ -55,7 +55,10 @@ public record ReferenceTable(String name, List<String> source, List<String> colu
         rows = List.copyOf(copy);
     }
 
-    /** @return the index of the named column; throws if there is none */
+    /**
+     * @param columnName a name from {@link #columns()}
+     * @return its 0-based index; throws {@link IllegalArgumentException} if there is none
+     */
     public int column(String columnName) {
         int i = columns.indexOf(columnName);
         if (i < 0) {
@@ -64,7 +67,11 @@ public record ReferenceTable(String name, List<String> source, List<String> colu
         return i;
     }
 
-    /** @return the number in the given row and column, or NaN when the cell is blank */
+    /**
+     * @param row        0-based row
+     * @param columnName column name
+     * @return the number there, or NaN when the cell is blank
+     */
     public double number(int row, String columnName) {
         Cell c = rows.get(row).get(column(columnName));
         if (c instanceof Number n) {
@@ -76,7 +83,11 @@ public record ReferenceTable(String name, List<String> source, List<String> colu
         throw new IllegalStateException(name + " row " + row + " column " + columnName + " is text: " + c);
     }
 
-    /** @return the text in the given row and column */
+    /**
+     * @param row        0-based row
+     * @param columnName column name
+     * @return the text there (a number as Java prints it, a blank as "")
+     */
     public String text(int row, String columnName) {
         Cell c = rows.get(row).get(column(columnName));
         if (c instanceof Text t) {

@@ -38,19 +38,28 @@ public record SurgeInput(double openCircuitV, double bankResistanceOhm, double c
         return bankResistanceOhm + cableRoundTripResistanceOhm;
     }
 
-    /** @return a copy with another cable resistance, Ω */
+    /**
+     * @param ohm cable round-trip resistance, Ω, ≥ 0
+     * @return a copy with that cable resistance
+     */
     public SurgeInput withCableRoundTripResistanceOhm(double ohm) {
         return new SurgeInput(openCircuitV, bankResistanceOhm, ohm, inverterInputW, lowVoltageCutoffV,
                 peakCurrentLimitA);
     }
 
-    /** @return a copy with another bank resistance, Ω */
+    /**
+     * @param ohm bank resistance, Ω, ≥ 0
+     * @return a copy with that bank resistance
+     */
     public SurgeInput withBankResistanceOhm(double ohm) {
         return new SurgeInput(openCircuitV, ohm, cableRoundTripResistanceOhm, inverterInputW, lowVoltageCutoffV,
                 peakCurrentLimitA);
     }
 
-    /** @return a copy with another inverter input power, W */
+    /**
+     * @param watts inverter DC input power during the start, W, ≥ 0
+     * @return a copy with that power
+     */
     public SurgeInput withInverterInputW(double watts) {
         return new SurgeInput(openCircuitV, bankResistanceOhm, cableRoundTripResistanceOhm, watts, lowVoltageCutoffV,
                 peakCurrentLimitA);
