@@ -22,7 +22,7 @@ class IecTablesTest {
     @ParameterizedTest(name = "{0} mm²")
     @CsvFileSource(resources = "iec-60228-check.csv", numLinesToSkip = 1)
     void iec60228_class2AndClass5_plainCopperAt20C(double areaMm2, double class2, double class5) {
-        // Source: IEC 60228 via REFERENCES §3b (conf. C: kabelmetal, uecables, mycableengineering).
+        // Source: IEC 60228 via REFERENCES §3b (conf. C, three public transcriptions).
         ConductorSize s = ConductorSize.metric(areaMm2);
         assertThat(TABLES.referenceResistanceOhmPerM(s, false)).isCloseTo(class2 / 1000.0, offset(1e-15));
         assertThat(TABLES.referenceResistanceOhmPerM(s, true)).isCloseTo(class5 / 1000.0, offset(1e-15));
@@ -44,7 +44,7 @@ class IecTablesTest {
     @ParameterizedTest(name = "{0} °C: kt {1}")
     @CsvFileSource(resources = "iec-60228-kt-check.csv", numLinesToSkip = 1)
     void iec60228AnnexB_temperatureFactor(double tempC, double kt) {
-        // Source: IEC 60228 Annex B kt table as printed by uecables (REFERENCES §3b, conf. C). The engine's
+        // Source: IEC 60228 Annex B kt table (REFERENCES §3b, conf. C, printed to 3 decimals). The engine's
         // R(t)/R(20) must be the reciprocal of kt.
         double ratio = ConductorTables.temperatureRatio(TableSystem.IEC, tempC);
         assertThat(1.0 / ratio).isCloseTo(kt, offset(KT_PRINTED_SLACK));
