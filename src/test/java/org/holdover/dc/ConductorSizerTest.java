@@ -145,7 +145,7 @@ class ConductorSizerTest {
      * design factor 1.
      *
      * <pre>
-     * 6 mm²: Iz 46 A &lt; 60 A; 10 mm²: Iz 63 A ≥ 60 A    (IEC 60364-5-52 B.52.2, secondary transcriptions)
+     * 6 mm²: Iz 46 A &lt; 60 A; 10 mm²: Iz 63 A ≥ 60 A    (IEC 60364-5-52 B.52.2, secondary copies)
      * 10 mm² class 2: 1.83 Ω/km at 20 °C (IEC 60228, REFERENCES §3b); at 70 °C ÷ kt 0.833 (§3b) = 2.197 mΩ/m
      * round trip 10 m → 0.02197 Ω × 60 A = 1.318 V = 2.746 % ≤ 3 %
      * </pre>

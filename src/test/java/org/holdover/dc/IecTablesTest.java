@@ -22,7 +22,7 @@ class IecTablesTest {
     @ParameterizedTest(name = "{0} mm²")
     @CsvFileSource(resources = "iec-60228-check.csv", numLinesToSkip = 1)
     void iec60228_class2AndClass5_plainCopperAt20C(double areaMm2, double class2, double class5) {
-        // Source: IEC 60228 via REFERENCES §3b (conf. C, three public transcriptions).
+        // Source: IEC 60228 via REFERENCES §3b (conf. C, three public copies).
         ConductorSize s = ConductorSize.metric(areaMm2);
         assertThat(TABLES.referenceResistanceOhmPerM(s, false)).isCloseTo(class2 / 1000.0, offset(1e-15));
         assertThat(TABLES.referenceResistanceOhmPerM(s, true)).isCloseTo(class5 / 1000.0, offset(1e-15));
@@ -53,7 +53,7 @@ class IecTablesTest {
     @ParameterizedTest(name = "{0} mm²: PVC {1} A, XLPE {2} A")
     @CsvFileSource(resources = "iec-60364-5-52-method-c-check.csv", numLinesToSkip = 1)
     void iec60364_5_52_methodC_twoLoadedConductors(double areaMm2, double pvc, double xlpe) {
-        // Source: IEC 60364-5-52:2009 Tables B.52.2/B.52.3 method C, via public transcriptions (secondary;
+        // Source: IEC 60364-5-52:2009 Tables B.52.2/B.52.3 method C, via public copies (secondary;
         // named in the check CSV). Not confirmed against the standard's page.
         ConductorSize s = ConductorSize.metric(areaMm2);
         assertThat(TABLES.tableAmpacityA(s, 70)).isEqualTo(pvc);
@@ -63,7 +63,7 @@ class IecTablesTest {
     @ParameterizedTest(name = "{0} °C")
     @CsvFileSource(resources = "iec-b52-14-check.csv", numLinesToSkip = 1)
     void iec60364_5_52_tableB52_14_ambientAir(double ambientC, double pvc, double xlpe) {
-        // Source: IEC 60364-5-52:2009 Table B.52.14 via public transcriptions (secondary; named in the check CSV).
+        // Source: IEC 60364-5-52:2009 Table B.52.14 via public copies (secondary; named in the check CSV).
         assertFactor(TABLES.iecAmbientFactor(ambientC, 70), pvc);
         assertFactor(TABLES.iecAmbientFactor(ambientC, 90), xlpe);
     }
@@ -71,7 +71,7 @@ class IecTablesTest {
     @Test
     void tableB52_14_followsTheSquareRootFormula() {
         // Derivation check (D): the factors are sqrt((θmax − θa)/(θmax − 30)) rounded to two decimals. Guards
-        // against a mistyped digit in the transcription.
+        // against a mistyped digit in the copy.
         double roundingSlack = 0.0051;
         for (ConductorTables.IecAmbientRow row : TABLES.iecAmbientCorrection()) {
             for (int tmax : new int[] {70, 90}) {
@@ -96,7 +96,7 @@ class IecTablesTest {
 
     @Test
     void tableB52_17_row1Grouping() {
-        // Source: IEC 60364-5-52:2009 Table B.52.17 row 1 via two public transcriptions (secondary).
+        // Source: IEC 60364-5-52:2009 Table B.52.17 row 1 via two public copies (secondary).
         assertThat(TABLES.iecGroupingFactor(1)).hasValue(1.00);
         assertThat(TABLES.iecGroupingFactor(2)).hasValue(0.80);
         assertThat(TABLES.iecGroupingFactor(3)).hasValue(0.70);

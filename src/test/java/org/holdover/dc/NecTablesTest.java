@@ -19,7 +19,7 @@ class NecTablesTest {
     @ParameterizedTest(name = "{0}: {1}/{2}/{3} A")
     @CsvFileSource(resources = "nec-310-16-2023-check.csv", numLinesToSkip = 1)
     void table310_16_copperAmpacities_nfpa70_2023(String size, double a60, double a75, double a90) {
-        // Source: NFPA 70-2023 Table 310.16 (REFERENCES §4a conf. C; kcmil rows: 2023 repo transcription).
+        // Source: NFPA 70-2023 Table 310.16 (REFERENCES §4a conf. C; kcmil rows: 2023 repo copy).
         ConductorSize s = TABLES.sizeOrThrow(TableSystem.NEC, size);
         assertThat(TABLES.tableAmpacityA(s, 60)).isEqualTo(a60);
         assertThat(TABLES.tableAmpacityA(s, 75)).isEqualTo(a75);
@@ -54,7 +54,7 @@ class NecTablesTest {
 
     /**
      * Derivation check (D): the factors follow the NEC 310.15(B) formula sqrt((Tc − Ta)/(Tc − 30)) taken at the
-     * warm end of each row, rounded to two decimals. A wrong digit in a transcription would show up here.
+     * warm end of each row, rounded to two decimals. A wrong digit in a copy would show up here.
      */
     @Test
     void ambientFactors_followTheSquareRootFormulaAtTheWarmEndOfEachRow() {
@@ -82,7 +82,7 @@ class NecTablesTest {
     @ParameterizedTest(name = "{0}: {2} ohm/kft")
     @CsvFileSource(resources = "nec-table8-check.csv", numLinesToSkip = 1)
     void chapter9Table8_strandedCopperAt75C(String size, double cmil, double ohmPerKft) {
-        // Source: NFPA 70-2023 Chapter 9 Table 8 (REFERENCES §3a conf. C; kcmil: second public transcription).
+        // Source: NFPA 70-2023 Chapter 9 Table 8 (REFERENCES §3a conf. C; kcmil: second public copy).
         ConductorSize s = TABLES.sizeOrThrow(TableSystem.NEC, size);
         ConductorTables.NecResistanceRow row = TABLES.necResistance().get(TABLES.indexOf(s));
         assertThat(row.strandedOhmPerKft()).isEqualTo(ohmPerKft);
