@@ -33,6 +33,19 @@ public record Site(double latitudeDeg, double longitudeDeg, double elevationM, d
         }
     }
 
+    /**
+     * A site whose offset is the standard (non-daylight-saving) offset of a time zone in the given
+     * year, read from the zone's rules at 1 January 00:00 UTC.
+     *
+     * @param zone a region-based zone such as {@code America/New_York}
+     * @param year the year whose rules apply
+     */
+    public static Site inZone(double latitudeDeg, double longitudeDeg, double elevationM, java.time.ZoneId zone, int year) {
+        java.time.Instant jan1 = java.time.LocalDate.of(year, 1, 1).atStartOfDay(java.time.ZoneOffset.UTC).toInstant();
+        int seconds = zone.getRules().getStandardOffset(jan1).getTotalSeconds();
+        return new Site(latitudeDeg, longitudeDeg, elevationM, seconds / 3600.0);
+    }
+
     /** The standard meridian of the site's time zone in degrees, east positive: 15 × offset. */
     public double standardMeridianDeg() {
         return 15.0 * utcOffsetHours;
