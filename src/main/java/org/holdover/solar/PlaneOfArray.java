@@ -27,24 +27,21 @@ public final class PlaneOfArray {
     /**
      * One hour's irradiance on the plane.
      *
-     * @param sun                         sun position at the hour's midpoint
-     * @param ghiWm2                      global horizontal irradiance, W/m², ≥ 0
-     * @param dniWm2                      direct normal irradiance, W/m², ≥ 0
-     * @param dhiWm2                      diffuse horizontal irradiance, W/m², ≥ 0
-     * @param extraterrestrialNormalWm2   G_on, W/m², &gt; 0 (only Hay–Davies uses it)
-     * @param settings                    orientation, sky model, albedo, IAM
+     * @param sun                       sun position at the hour's midpoint
+     * @param horizontal                GHI, DNI and DHI, W/m²
+     * @param extraterrestrialNormalWm2 G_on, W/m², &gt; 0 (only Hay–Davies uses it)
+     * @param settings                  orientation, sky model, albedo, IAM
      */
-    public static PoaIrradiance hour(SunPosition sun, double ghiWm2, double dniWm2, double dhiWm2,
-            double extraterrestrialNormalWm2, PoaSettings settings) {
+    public static PoaIrradiance hour(SunPosition sun, HorizontalIrradiance horizontal, double extraterrestrialNormalWm2,
+            PoaSettings settings) {
         Objects.requireNonNull(sun, "sun");
+        Objects.requireNonNull(horizontal, "horizontal");
         Objects.requireNonNull(settings, "settings");
-        if (!(ghiWm2 >= 0 && dniWm2 >= 0 && dhiWm2 >= 0)) {
-            throw new IllegalArgumentException("irradiance must be >= 0");
-        }
         if (!(extraterrestrialNormalWm2 > 0)) {
             throw new IllegalArgumentException("extraterrestrialNormalWm2 must be > 0, got " + extraterrestrialNormalWm2);
         }
-        return compute(sun.zenithDeg(), sun.azimuthDeg(), ghiWm2, dniWm2, dhiWm2, extraterrestrialNormalWm2, settings);
+        return compute(sun.zenithDeg(), sun.azimuthDeg(), horizontal.ghiWm2(), horizontal.dniWm2(), horizontal.dhiWm2(),
+                extraterrestrialNormalWm2, settings);
     }
 
     static PoaIrradiance compute(double zenithDeg, double sunAzimuthDeg, double ghi, double dni, double dhi,

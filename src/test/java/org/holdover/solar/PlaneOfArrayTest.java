@@ -31,7 +31,7 @@ class PlaneOfArrayTest {
         double groundByHand = GHI * 0.2 * (1 - Math.cos(Math.toRadians(30))) / 2;
         double beamByHand = DNI * cosTheta;
 
-        PoaIrradiance p = PlaneOfArray.hour(SUN, GHI, DNI, DHI, G0N,
+        PoaIrradiance p = PlaneOfArray.hour(SUN, new HorizontalIrradiance(GHI, DNI, DHI), G0N,
                 new PoaSettings(SURFACE, SkyModel.HAY_DAVIES, 0.2, IncidenceAngleModifier.none()));
         assertThat(p.skyDiffuseWm2()).isCloseTo(skyByHand, within(SAME_FORMULA));
         assertThat(p.groundWm2()).isCloseTo(groundByHand, within(SAME_FORMULA));
@@ -48,7 +48,7 @@ class PlaneOfArrayTest {
 
     @Test
     void isotropicVector() {
-        PoaIrradiance p = PlaneOfArray.hour(SUN, GHI, DNI, DHI, G0N,
+        PoaIrradiance p = PlaneOfArray.hour(SUN, new HorizontalIrradiance(GHI, DNI, DHI), G0N,
                 new PoaSettings(SURFACE, SkyModel.ISOTROPIC, 0.2, IncidenceAngleModifier.none()));
         // REFERENCES.md §9c: isotropic sky 93.301 (D, = 100 (1 + cos 30°)/2).
         assertThat(p.skyDiffuseWm2()).isCloseTo(DHI * (1 + Math.cos(Math.toRadians(30))) / 2, within(SAME_FORMULA));
@@ -61,8 +61,8 @@ class PlaneOfArrayTest {
         SunPosition sun = new SunPosition(60, 120);
         PoaSettings hd = new PoaSettings(SURFACE, SkyModel.HAY_DAVIES, 0.2, IncidenceAngleModifier.none());
         PoaSettings iso = new PoaSettings(SURFACE, SkyModel.ISOTROPIC, 0.2, IncidenceAngleModifier.none());
-        assertThat(PlaneOfArray.hour(sun, 150, 0, 150, G0N, hd).skyDiffuseWm2())
-                .isCloseTo(PlaneOfArray.hour(sun, 150, 0, 150, G0N, iso).skyDiffuseWm2(), within(SAME_FORMULA));
+        assertThat(PlaneOfArray.hour(sun, new HorizontalIrradiance(150, 0, 150), G0N, hd).skyDiffuseWm2())
+                .isCloseTo(PlaneOfArray.hour(sun, new HorizontalIrradiance(150, 0, 150), G0N, iso).skyDiffuseWm2(), within(SAME_FORMULA));
     }
 
     @Test
@@ -82,7 +82,7 @@ class PlaneOfArrayTest {
     void modifierAppliesToTheBeamOnly() {
         SunPosition sun = new SunPosition(50, 120);
         PoaSettings with = new PoaSettings(SURFACE, SkyModel.HAY_DAVIES, 0.2, IncidenceAngleModifier.ashraeDefault());
-        PoaIrradiance p = PlaneOfArray.hour(sun, 500, 600, 120, G0N, with);
+        PoaIrradiance p = PlaneOfArray.hour(sun, new HorizontalIrradiance(500, 600, 120), G0N, with);
         assertThat(p.effectiveWm2()).isCloseTo(p.beamWm2() * p.iam() + p.skyDiffuseWm2() + p.groundWm2(),
                 within(SAME_FORMULA));
         assertThat(p.iam()).isCloseTo(IncidenceAngleModifier.ashraeDefault().atAngle(p.incidenceDeg()), within(SAME_FORMULA));
@@ -91,7 +91,7 @@ class PlaneOfArrayTest {
 
     @Test
     void sunBehindThePlaneGivesNoBeam() {
-        PoaIrradiance p = PlaneOfArray.hour(new SunPosition(70, 0), 200, 300, 100, G0N, PoaSettings.defaults(SURFACE));
+        PoaIrradiance p = PlaneOfArray.hour(new SunPosition(70, 0), new HorizontalIrradiance(200, 300, 100), G0N, PoaSettings.defaults(SURFACE));
         assertThat(p.incidenceDeg()).isGreaterThan(90);
         assertThat(p.beamWm2()).isZero();
         assertThat(p.iam()).isZero();
@@ -104,7 +104,7 @@ class PlaneOfArrayTest {
         double dni = 700;
         double dhi = 110;
         double ghi = dhi + dni * Math.cos(Math.toRadians(40));
-        PoaIrradiance p = PlaneOfArray.hour(sun, ghi, dni, dhi, G0N,
+        PoaIrradiance p = PlaneOfArray.hour(sun, new HorizontalIrradiance(ghi, dni, dhi), G0N,
                 new PoaSettings(new SurfaceOrientation(0, 180), SkyModel.HAY_DAVIES, 0.2, IncidenceAngleModifier.none()));
         assertThat(p.totalWm2()).isCloseTo(ghi, within(1e-9));
     }
