@@ -1,0 +1,146 @@
+package org.holdover.pv;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import org.holdover.solar.PlaneOfArray;
+import org.holdover.solar.PoaSeries;
+import org.holdover.solar.PoaSettings;
+import org.holdover.solar.SunPath;
+import org.holdover.solar.SurfaceOrientation;
+import org.holdover.solar.WeatherYear;
+
+/**
+ * Chooses the tilt that favours the worst month: for each candidate tilt, the hourly plane-of-array
+ * irradiance and DC output of one reference module give each month's peak sun hours and derate,
+ * the worst-month method gives the array needed, and the tilt needing the smallest array wins (ties
+ * go to the lower tilt).
+ */
+public final class TiltSearch {
+
+    private TiltSearch() {
+    }
+
+    /**
+     * @param weather             hourly weather
+     * @param sunPath             sun positions for the same hours
+     * @param settings            sky model, albedo, IAM and the array azimuth (its tilt is replaced)
+     * @param tiltsDeg            tilts to try, degrees in [0, 90]
+     * @param module              the module (temperature behaviour)
+     * @param losses              DC losses
+     * @param controllerEfficiency controller efficiency, in (0, 1]
+     * @param dailyEnergyWh       energy needed per day by month at the battery terminals, Wh/day
+     * @param batteryRoundTripEfficiency in (0, 1]
+     */
+    public record Input(WeatherYear weather, SunPath sunPath, PoaSettings settings, double[] tiltsDeg, PvModule module,
+            DcLosses losses, double controllerEfficiency, double[] dailyEnergyWh, double batteryRoundTripEfficiency) {
+        public Input {
+            Objects.requireNonNull(weather, "weather");
+            Objects.requireNonNull(sunPath, "sunPath");
+            Objects.requireNonNull(settings, "settings");
+            Objects.requireNonNull(module, "module");
+            Objects.requireNonNull(losses, "losses");
+            if (tiltsDeg == null || tiltsDeg.length == 0) {
+                throw new IllegalArgumentException("need at least one tilt");
+            }
+            tiltsDeg = tiltsDeg.clone();
+            if (!(controllerEfficiency > 0 && controllerEfficiency <= 1)) {
+                throw new IllegalArgumentException("controllerEfficiency must be in (0, 1]");
+            }
+            dailyEnergyWh = WorstMonthSizing.twelve("dailyEnergyWh", dailyEnergyWh, 0, Double.MAX_VALUE);
+        }
+
+        @Override
+        public double[] tiltsDeg() {
+            return tiltsDeg.clone();
+        }
+
+        @Override
+        public double[] dailyEnergyWh() {
+            return dailyEnergyWh.clone();
+        }
+    }
+
+    /**
+     * One tilt's result.
+     *
+     * @param tiltDeg      the tilt
+     * @param peakSunHours plane-of-array kWh/m²/day by month (before reflection loss)
+     * @param derate       DC performance ratio × controller efficiency by month
+     * @param sizing       the worst-month sizing at this tilt
+     */
+    public record Option(double tiltDeg, double[] peakSunHours, double[] derate, MonthlySizingResult sizing) {
+        public Option {
+            peakSunHours = peakSunHours.clone();
+            derate = derate.clone();
+            Objects.requireNonNull(sizing, "sizing");
+        }
+
+        @Override
+        public double[] peakSunHours() {
+            return peakSunHours.clone();
+        }
+
+        @Override
+        public double[] derate() {
+            return derate.clone();
+        }
+    }
+
+    /**
+     * @param options every tilt tried, in the order given
+     * @param best    index of the chosen tilt in {@code options}
+     */
+    public record Result(List<Option> options, int best) {
+        public Result {
+            options = List.copyOf(options);
+            if (best < 0 || best >= options.size()) {
+                throw new IllegalArgumentException("best out of range");
+            }
+        }
+
+        public Option chosen() {
+            return options.get(best);
+        }
+    }
+
+    /** Evenly spaced tilts from {@code fromDeg} to {@code toDeg} inclusive. */
+    public static double[] tilts(double fromDeg, double toDeg, double stepDeg) {
+        if (!(stepDeg > 0 && fromDeg <= toDeg)) {
+            throw new IllegalArgumentException("need step > 0 and from <= to");
+        }
+        int n = (int) Math.floor((toDeg - fromDeg) / stepDeg + 1e-9) + 1;
+        double[] t = new double[n];
+        for (int i = 0; i < n; i++) {
+            t[i] = fromDeg + i * stepDeg;
+        }
+        return t;
+    }
+
+    public static Result search(Input in) {
+        PvArray reference = new PvArray(in.module(), 1, 1);
+        double[] air = in.weather().airTempC();
+        List<Option> options = new ArrayList<>();
+        int best = 0;
+        for (double tilt : in.tiltsDeg()) {
+            PoaSettings s = in.settings().withOrientation(
+                    new SurfaceOrientation(tilt, in.settings().orientation().azimuthDeg()));
+            PoaSeries poa = PlaneOfArray.hourly(in.weather(), in.sunPath(), s);
+            ArrayDcSeries dc = ArrayDcSeries.compute(reference, poa, air, in.losses());
+            double[] psh = poa.monthlyPeakSunHours(false);
+            double[] pr = dc.monthlyDcPerformanceRatio();
+            double[] derate = new double[12];
+            for (int m = 0; m < 12; m++) {
+                // A month without sun has no derate; any positive value gives +∞ need when there is load.
+                derate[m] = Double.isNaN(pr[m]) || pr[m] <= 0 ? 1.0 : pr[m] * in.controllerEfficiency();
+            }
+            MonthlySizingResult r = WorstMonthSizing.size(new WorstMonthSizing.Input(in.dailyEnergyWh(), psh, derate,
+                    in.batteryRoundTripEfficiency()));
+            options.add(new Option(tilt, psh, derate, r));
+            if (r.requiredStcW() < options.get(best).sizing().requiredStcW()) {
+                best = options.size() - 1;
+            }
+        }
+        return new Result(options, best);
+    }
+}
