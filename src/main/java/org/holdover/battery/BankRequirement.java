@@ -12,7 +12,7 @@ package org.holdover.battery;
  * @param continuousA     continuous DC current at the inverter's low-voltage cutoff, A
  * @param surgeA          DC current during the motor start at the cutoff voltage, A
  * @param surgeS          length of the start, s
- * @param maxParallel     project cap on parallel strings, or 0 for none
+ * @param maxParallel     project limit on parallel strings (replaces the chemistry's practice), or 0 for none
  */
 public record BankRequirement(double busClassV, double energyDcWh, double dischargeHours, double depthOfDischarge,
                               double endOfLife, double batteryTempC, double continuousA, double surgeA, double surgeS,

@@ -50,10 +50,8 @@ public final class BankSizing {
         double surgeLimit = r.surgeS() <= module.surgeS() ? module.maxSurgeA() : module.maxContinuousA();
         int forSurge = roundUp(r.surgeA() / surgeLimit);
         int strings = Math.max(forEnergy, Math.max(forContinuous, forSurge));
-        int maxParallel = Math.min(module.maxParallel(), c.defaultMaxParallel());
-        if (r.maxParallel() > 0) {
-            maxParallel = Math.min(maxParallel, r.maxParallel());
-        }
+        // The project's rule, when given, replaces the chemistry's practice; the module's own limit always holds.
+        int maxParallel = Math.min(module.maxParallel(), r.maxParallel() > 0 ? r.maxParallel() : c.defaultMaxParallel());
         boolean feasible = strings <= maxParallel;
         String limit = "";
         if (!feasible) {

@@ -42,6 +42,12 @@ public final class LoadModel {
         if (motorsTogether < 1) {
             throw new IllegalArgumentException("motorsTogether must be >= 1");
         }
+        for (Appliance a : appliances) {
+            if ((a.leg() == Leg.LINE) == splitPhase) {
+                throw new IllegalArgumentException(a.name() + ": leg " + a.leg() + " does not fit a "
+                        + (splitPhase ? "split-phase" : "single-phase") + " service");
+            }
+        }
         double[] profile = profileW == null ? new double[n] : profileW.clone();
         List<StartingMotor> starting = startingSet(appliances, motorsTogether);
         int[] startingUnits = new int[appliances.size()];

@@ -147,7 +147,7 @@ final class BatterySheet {
             s.formula(r, S_CONT, "MAX(0,ROUNDUP(ContA/F" + R + "-RoundingSlack,0))", b.stringsForContinuous(), Styles.INT);
             s.formula(r, S_SURGE, "MAX(0,ROUNDUP(SurgeA/IF(StartS<=H" + R + ",G" + R + ",F" + R + ")-RoundingSlack,0))", b.stringsForSurge(), Styles.INT);
             s.formula(r, STRINGS, "MAX(X" + R + ",Y" + R + ",Z" + R + ")", b.strings(), Styles.INT);
-            s.formula(r, PAR_LIMIT, "MIN(I" + R + ",INDEX(ChemMaxPar," + chem + "),IF(MaxParallelRule>0,MaxParallelRule,I" + R + "))",
+            s.formula(r, PAR_LIMIT, "MIN(I" + R + ",IF(MaxParallelRule>0,MaxParallelRule,INDEX(ChemMaxPar," + chem + ")))",
                     b.maxParallel(), Styles.INT);
             s.formulaText(r, FEASIBLE, "IF(AA" + R + "<=AB" + R + ",\"yes\",\"no\")", b.feasible() ? "yes" : "no");
             s.formula(r, KWH, "N" + R + "*(AA" + R + "*D" + R + ")/1000", b.bankEnergyWh() / 1000.0, Styles.D2);
