@@ -111,6 +111,8 @@ final class OfficeConverter {
             long start = System.nanoTime();
             int exit = ExternalTools.run(command, log, timeout);
             Duration elapsed = Duration.ofNanos(System.nanoTime() - start);
+            Files.writeString(runDir.resolve("timing.txt"), "soffice --convert-to " + convertTo + ": "
+                    + elapsed.toMillis() + " ms wall time for " + inputs.size() + " file(s), exit " + exit + "\n");
             List<Path> missing = expected.stream().filter(p -> !isNonEmptyFile(p)).toList();
             if (exit != 0 || !missing.isEmpty()) {
                 throw new IllegalStateException("soffice --convert-to " + convertTo + " exited with " + exit
