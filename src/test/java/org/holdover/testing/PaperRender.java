@@ -45,6 +45,18 @@ import org.apache.poi.xssf.usermodel.XSSFWorkbook;
  * below (fit-to-width can shrink a wide sheet until it is unreadable): see
  * {@link SheetFit#assertFitsPageWidth(double)}. The sheet needs some text on its first printed page
  * (a title in A1 is enough); a print area or print titles are not taken into account.
+ *
+ * <h2>For the workbook writer (each shown by {@code PaperRenderTest} or seen while writing it)</h2>
+ * <ul>
+ *   <li>Fit to width needs three calls: {@code setFitWidth((short) 1)}, {@code setFitHeight((short) 0)}
+ *       on the print set-up <em>and</em> {@code sheet.setFitToPage(true)}; without the last one the
+ *       application ignores the fit and prints at 100 %.</li>
+ *   <li>The application zooms to a whole percent, rounding down (about 1 % below the exact ratio).</li>
+ *   <li>Give every cell a style with an explicitly named font. Cells left in the library's default style
+ *       (Calibri marked as the theme's minor font, with no theme part in the file) print in the
+ *       application's fallback font (DejaVu Sans, about 25 % wider), while explicitly named Calibri
+ *       prints in the metric-compatible Carlito, laid out as in the file format's column-width rule.</li>
+ * </ul>
  */
 public final class PaperRender {
 

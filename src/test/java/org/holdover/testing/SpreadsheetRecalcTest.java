@@ -117,6 +117,14 @@ class SpreadsheetRecalcTest {
     }
 
     @Test
+    void aFileTheApplicationCannotOpenIsAnErrorEvenThoughItExitsWithZero() throws Exception {
+        Path broken = Artifacts.dir("recalc-harness").resolve("broken.xlsx");
+        Files.write(broken, new byte[] {'P', 'K', 3, 4, 'b', 'r', 'o', 'k', 'e', 'n'});
+        assertThatThrownBy(() -> SpreadsheetRecalc.recalculate(broken)).isInstanceOf(IllegalStateException.class)
+                .hasMessageContaining("exited with 0").hasMessageContaining("missing outputs");
+    }
+
+    @Test
     void theLibraryAgreesWithTheApplicationOnTheSameWorkbook() {
         RecalcReport library = PoiRecalc.recalculate(right);
         library.assertAgrees();
