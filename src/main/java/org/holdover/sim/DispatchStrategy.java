@@ -24,11 +24,11 @@ public sealed interface DispatchStrategy {
      * as much as the charger, the battery and the generator allow; once started it keeps running, hour
      * after hour, until the state of charge at the start of an hour has reached the set point.
      *
-     * @param setPointSoc state of charge at which a running generator stops, fraction in (0, 1]
+     * @param setPointSoc state of charge at which a running generator stops, fraction in [0, 1]
      */
     record CycleCharging(double setPointSoc) implements DispatchStrategy {
         public CycleCharging {
-            Checks.efficiency("setPointSoc", setPointSoc);
+            Checks.fraction("setPointSoc", setPointSoc);
         }
     }
 }
