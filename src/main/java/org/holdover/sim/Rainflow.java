@@ -17,8 +17,19 @@ public final class Rainflow {
      * @return the ranges counted; half cycles for the residue
      */
     public static List<RainflowCycle> count(double[] history) {
+        return count(history, 0);
+    }
+
+    /**
+     * Counts the cycles of a history after dropping reversals not larger than a hysteresis gate.
+     *
+     * @param history values in time order (finite)
+     * @param gate    reversals of this size or smaller are ignored, in the history's unit (&ge; 0)
+     * @return the ranges counted
+     */
+    public static List<RainflowCycle> count(double[] history, double gate) {
         List<RainflowCycle> out = new ArrayList<>();
-        RainflowCounter counter = new RainflowCounter() {
+        RainflowCounter counter = new RainflowCounter(gate) {
             @Override
             void cycle(double from, double to, double count) {
                 out.add(new RainflowCycle(Math.abs(to - from), (from + to) / 2, count));
@@ -40,8 +51,20 @@ public final class Rainflow {
      * @return damage (1 = end of life)
      */
     public static double minerDamage(double[] socHistory, CycleLifeCurve curve) {
+        return minerDamage(socHistory, curve, 0);
+    }
+
+    /**
+     * Miner's-rule damage after a hysteresis gate (see {@link #count(double[], double)}).
+     *
+     * @param socHistory state of charge, fraction, in time order
+     * @param curve      cycles against depth of discharge
+     * @param gate       reversals of this size or smaller are ignored, fraction (&ge; 0)
+     * @return damage (1 = end of life)
+     */
+    public static double minerDamage(double[] socHistory, CycleLifeCurve curve, double gate) {
         double d = 0;
-        for (RainflowCycle c : count(socHistory)) {
+        for (RainflowCycle c : count(socHistory, gate)) {
             if (c.range() > 0) {
                 d += c.count() * curve.damagePerCycle(c.range());
             }

@@ -17,14 +17,25 @@ import java.util.Arrays;
  * </ol>
  *
  * Allocation happens only when the stack outgrows its array (rare: the stack holds the residue).
+ *
+ * <p>An optional hysteresis gate drops reversals not larger than the gate before counting (a filter
+ * commonly applied to measured histories; common practice, no source). With a gate of 0 the count is the
+ * standard's.
  */
 abstract class RainflowCounter {
+
+    private final double gate;
 
     private double[] stack = new double[64];
     private int size;
     private boolean started;
     private double candidate;
     private int direction;
+
+    /** @param gate reversals of this size or smaller are ignored (&ge; 0; 0 counts every reversal) */
+    RainflowCounter(double gate) {
+        this.gate = Checks.nonNegative("gate", gate);
+    }
 
     /** Called for each range counted: from and to are the range's points, count is 0.5 or 1. */
     abstract void cycle(double from, double to, double count);
@@ -37,13 +48,13 @@ abstract class RainflowCounter {
             return;
         }
         if (direction == 0) {
-            if (value != candidate) {
+            if (Math.abs(value - candidate) > gate) {
                 direction = value > candidate ? 1 : -1;
                 candidate = value;
             }
         } else if ((value - candidate) * direction > 0) {
             candidate = value;
-        } else if (value != candidate) {
+        } else if (Math.abs(value - candidate) > gate) {
             add(candidate);
             direction = -direction;
             candidate = value;
@@ -55,6 +66,17 @@ abstract class RainflowCounter {
         if (direction != 0) {
             add(candidate);
         }
+        countResidue();
+    }
+
+    /** Feeds the first {@code count} values of a block, in order. */
+    final void pushAll(double[] values, int count) {
+        for (int i = 0; i < count; i++) {
+            push(values[i]);
+        }
+    }
+
+    private void countResidue() {
         for (int i = 0; i + 1 < size; i++) {
             cycle(stack[i], stack[i + 1], 0.5);
         }

@@ -104,14 +104,24 @@ import java.util.Optional;
  * Sums of the hourly values, plus: loss-of-load probability = hours with unmet &gt; 0 / hours; unmet energy
  * fraction = unmet Wh / load Wh; lowest state of charge and hours below thresholds over the end-of-hour
  * values; equivalent full cycles = battery DC output / nominal energy; battery life by rainflow counting
- * (ASTM E1049-85 §5.4.4) of the state-of-charge series (the initial value, then each end-of-hour value),
- * each range taken as a depth of discharge, Miner's rule against the cycle-life curve, scaled to one year
+ * (ASTM E1049-85 §5.4.4) of the state-of-charge series (the initial value, then each end-of-hour value;
+ * reversals up to {@link #RAINFLOW_GATE_SOC} dropped first), each range taken as a depth of discharge, Miner's rule against the cycle-life curve, scaled to one year
  * (8,760 and 8,784 hours are one year; other lengths count as hours / 8,760 years), and calendar life.
  *
  * <p>{@link #run} computes the metrics without allocating per hour; {@link #runTraced} also records every
  * hour. Both run the same code, so their metrics are identical.
  */
 public final class YearSimulation {
+
+    /**
+     * Hysteresis gate for rainflow counting of the state of charge, fraction of nominal energy: reversals of
+     * 1e-6 or less (0.01 Wh on a 10 kWh bank) are dropped before counting. They are rounding noise (a bank
+     * held at a floor or reserve wiggles by a few units in the last place) or wear too small to matter, and
+     * counting them would cost a logarithm and an exponential each.
+     */
+    public static final double RAINFLOW_GATE_SOC = 1e-6;
+
+    private static final int SOC_BLOCK = 256;
 
     private YearSimulation() {
     }
@@ -148,6 +158,7 @@ public final class YearSimulation {
         private double damage;
 
         DamageCounter(CycleLifeCurve curve) {
+            super(RAINFLOW_GATE_SOC);
             this.curve = curve;
         }
 
@@ -158,6 +169,16 @@ public final class YearSimulation {
                 damage += count * curve.damagePerCycle(range);
             }
         }
+    }
+
+    /** Minimum of two finite values (the loop's inputs are validated finite; no NaN or signed-zero rules). */
+    private static double min(double a, double b) {
+        return a < b ? a : b;
+    }
+
+    /** Maximum of two finite values. */
+    private static double max(double a, double b) {
+        return a > b ? a : b;
     }
 
     private static SimulationMetrics simulate(SystemDesign design, HourlyConditions in, AnalysisOptions options,
@@ -189,6 +210,12 @@ public final class YearSimulation {
         final double pD = bat.maxDischargeW();
         final double pChg = design.charger().maxAcInputW();
         final double etaChg = design.charger().efficiency();
+        // Reciprocals: multiplications keep the hour-to-hour dependency chain through E short.
+        final double rEtaC = 1 / etaC;
+        final double rEtaD = 1 / etaD;
+        final double rEtaChg = 1 / etaChg;
+        final double rPr = 1 / pr;
+        final double rENom = 1 / eNom;
 
         final Optional<Generator> gen = design.generator();
         final boolean hasGen = gen.isPresent();
@@ -211,6 +238,10 @@ public final class YearSimulation {
 
         double e = bat.initialSoc() * eNom;
         boolean prevOn = false;
+        // The state of charge goes to the rainflow counter in blocks, outside the hourly loop's body, which
+        // keeps that body small (one array per run, not per hour).
+        final double[] socBlock = damage != null ? new double[SOC_BLOCK] : null;
+        int blockFill = 0;
         if (damage != null) {
             damage.push(e / eNom);
         }
@@ -244,9 +275,9 @@ public final class YearSimulation {
             final double g = pvArray[t];
             // 1-4
             final double pvAvail = etaCc * g;
-            final double pv = Math.min(pvAvail, pCc);
+            final double pv = min(pvAvail, pCc);
             final double clip = pvAvail - pv;
-            final double acc = noCharge[t] ? 0 : Math.max(0, Math.min(pC, (eHi - e) / etaC));
+            final double acc = noCharge[t] ? 0 : max(0, min(pC, (eHi - e) * rEtaC));
 
             boolean on = false;
             double pvInv;
@@ -267,20 +298,20 @@ public final class YearSimulation {
                 invIn = 0;
                 invOut = 0;
                 unmet = 0;
-                pvBat = Math.min(pv, acc);
+                pvBat = min(pv, acc);
                 curt = pv - pvBat;
-                chgIn = Math.min(pChg, (acc - pvBat) / etaChg);
+                chgIn = min(pChg, (acc - pvBat) * rEtaChg);
             } else {
-                final double x = l / pr;
+                final double x = l * rPr;
                 final double d = l + pr * (p0 + k1 * x + k2 * x * x);
-                final double pvInv0 = Math.min(pv, d);
+                final double pvInv0 = min(pv, d);
                 final double r = d - pvInv0;
                 final double s = pv - pvInv0;
-                final double avail1 = Math.min(pD, Math.max(0, (e - eRes) * etaD));
-                final double d1 = Math.min(r, avail1);
+                final double avail1 = min(pD, max(0, (e - eRes) * etaD));
+                final double d1 = min(r, avail1);
                 final double r1 = r - d1;
                 final double a1 = pvInv0 + d1;
-                final double t1 = r1 > 0 ? Math.min(l, InverterLossModel.outputW(a1, pr, p0, b, k2)) : l;
+                final double t1 = r1 > 0 ? min(l, InverterLossModel.outputW(a1, pr, p0, b, k2)) : l;
                 on = hasGen && (l - t1 > 0 || (cycleCharging && prevOn && e < eSet));
                 if (!on) {
                     pvInv = pvInv0;
@@ -288,53 +319,53 @@ public final class YearSimulation {
                     invIn = a1;
                     invOut = t1;
                     unmet = l - t1;
-                    pvBat = Math.min(s, acc);
+                    pvBat = min(s, acc);
                     curt = s - pvBat;
                 } else if (!cycleCharging) {
-                    genLoad = Math.min(pAv, l - t1);
+                    genLoad = min(pAv, l - t1);
                     final double t2 = l - genLoad;
                     double need2 = 0;
                     if (t2 > t1) {
-                        final double x2 = t2 / pr;
-                        need2 = Math.max(0, t2 + pr * (p0 + k1 * x2 + k2 * x2 * x2) - a1);
+                        final double x2 = t2 * rPr;
+                        need2 = max(0, t2 + pr * (p0 + k1 * x2 + k2 * x2 * x2) - a1);
                     }
-                    final double avail2 = Math.min(pD - d1, Math.max(0, (Math.min(e, eRes) - eLo) * etaD));
-                    final double d2 = Math.min(need2, avail2);
-                    invOut = d2 >= need2 ? t2 : Math.min(t2, InverterLossModel.outputW(a1 + d2, pr, p0, b, k2));
+                    final double avail2 = min(pD - d1, max(0, (min(e, eRes) - eLo) * etaD));
+                    final double d2 = min(need2, avail2);
+                    invOut = d2 >= need2 ? t2 : min(t2, InverterLossModel.outputW(a1 + d2, pr, p0, b, k2));
                     unmet = t2 - invOut;
                     pvInv = pvInv0;
                     dis = d1 + d2;
                     invIn = a1 + d2;
                     pvBat = 0;
                     curt = s;
-                    dump = Math.max(0, pMin - genLoad);
+                    dump = max(0, pMin - genLoad);
                 } else {
-                    genLoad = Math.min(pAv, l);
+                    genLoad = min(pAv, l);
                     final double tInv = l - genLoad;
                     double d2 = 0;
                     if (tInv > 0) {
-                        final double x2 = tInv / pr;
+                        final double x2 = tInv * rPr;
                         d2 = tInv + pr * (p0 + k1 * x2 + k2 * x2 * x2);
                     }
-                    pvInv = Math.min(pv, d2);
+                    pvInv = min(pv, d2);
                     final double rem = d2 - pvInv;
-                    final double availF = Math.min(pD, Math.max(0, (e - eLo) * etaD));
+                    final double availF = min(pD, max(0, (e - eLo) * etaD));
                     final boolean covered = rem <= availF;
                     dis = covered ? rem : availF;
                     invIn = pvInv + dis;
-                    invOut = covered ? tInv : Math.min(tInv, InverterLossModel.outputW(invIn, pr, p0, b, k2));
+                    invOut = covered ? tInv : min(tInv, InverterLossModel.outputW(invIn, pr, p0, b, k2));
                     unmet = tInv - invOut;
-                    pvBat = Math.min(pv - pvInv, acc);
+                    pvBat = min(pv - pvInv, acc);
                     curt = pv - pvInv - pvBat;
-                    chgIn = Math.min(pChg, Math.min(pAv - genLoad, (acc - pvBat) / etaChg));
-                    dump = Math.max(0, pMin - genLoad - chgIn);
+                    chgIn = min(pChg, min(pAv - genLoad, (acc - pvBat) * rEtaChg));
+                    dump = max(0, pMin - genLoad - chgIn);
                 }
             }
             // 12-15
             final double chgOut = etaChg * chgIn;
             final double batIn = pvBat + chgOut;
-            e = e + etaC * batIn - dis / etaD;
-            soc = e / eNom;
+            e = e + etaC * batIn - dis * rEtaD;
+            soc = e * rENom;
             double genOut = 0;
             double fuel = 0;
             if (on) {
@@ -349,8 +380,8 @@ public final class YearSimulation {
 
             sumLoad += l;
             sumServed += l - unmet;
-            sumUnmet += unmet;
             if (unmet > 0) {
+                sumUnmet += unmet;
                 unmetHours++;
             }
             sumPvArray += g;
@@ -361,14 +392,14 @@ public final class YearSimulation {
             sumInvOut += invOut;
             sumBatIn += batIn;
             sumDis += dis;
-            sumFuel += fuel;
-            sumGenOut += genOut;
-            sumGenLoad += genLoad;
-            sumDump += dump;
-            sumGridLoad += gridLoad;
             if (on) {
+                sumFuel += fuel;
+                sumGenOut += genOut;
+                sumGenLoad += genLoad;
+                sumDump += dump;
                 sumGenChg += chgIn;
-            } else {
+            } else if (gridLoad > 0 || chgIn > 0) {
+                sumGridLoad += gridLoad;
                 sumGridChg += chgIn;
             }
             if (soc < lowestSoc) {
@@ -379,8 +410,12 @@ public final class YearSimulation {
                     below[i]++;
                 }
             }
-            if (damage != null) {
-                damage.push(soc);
+            if (socBlock != null) {
+                socBlock[blockFill++] = soc;
+                if (blockFill == SOC_BLOCK) {
+                    damage.pushAll(socBlock, blockFill);
+                    blockFill = 0;
+                }
             }
             if (tr != null) {
                 tr.storedWh[t] = e;
@@ -413,6 +448,7 @@ public final class YearSimulation {
         }
         Optional<BatteryLife> life = Optional.empty();
         if (damage != null) {
+            damage.pushAll(socBlock, blockFill);
             damage.finish();
             double years = n == 8784 ? 1.0 : n / 8760.0;
             life = Optional.of(BatteryLife.of(damage.damage / years, options.aging().get().calendarLifeYears()));

@@ -50,7 +50,8 @@ class YearSimulationFastPathTest {
         double[] history = new double[tr.hours() + 1];
         history[0] = design.battery().initialSoc();
         System.arraycopy(tr.soc(), 0, history, 1, tr.hours());
-        double damage = Rainflow.minerDamage(history, DemoYear.fullOptions().aging().orElseThrow().cycleLife());
+        double damage = Rainflow.minerDamage(history, DemoYear.fullOptions().aging().orElseThrow().cycleLife(),
+                YearSimulation.RAINFLOW_GATE_SOC);
         BatteryLife life = fast.battery().life().orElseThrow();
         assertThat(life.cycleDamagePerYear()).isCloseTo(damage, within(damage * RELATIVE));
         assertThat(life.lifeYears()).isCloseTo(Math.min(1 / damage, 15), within(15 * RELATIVE));
