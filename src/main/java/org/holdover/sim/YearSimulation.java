@@ -181,6 +181,41 @@ public final class YearSimulation {
         return a > b ? a : b;
     }
 
+    /**
+     * Statistics of the end-of-hour state of charge, fed in blocks from outside the hourly loop's body so
+     * that body stays small: hours below each threshold and the rainflow damage.
+     */
+    private static final class SocStatistics {
+        final double[] block = new double[SOC_BLOCK];
+        int fill;
+        final double[] thresholds;
+        final int[] below;
+        final DamageCounter damage;
+
+        SocStatistics(double[] thresholds, DamageCounter damage) {
+            this.thresholds = thresholds;
+            this.below = new int[thresholds.length];
+            this.damage = damage;
+        }
+
+        void flush() {
+            for (int k = 0; k < thresholds.length; k++) {
+                double th = thresholds[k];
+                int count = 0;
+                for (int i = 0; i < fill; i++) {
+                    if (block[i] < th) {
+                        count++;
+                    }
+                }
+                below[k] += count;
+            }
+            if (damage != null) {
+                damage.pushAll(block, fill);
+            }
+            fill = 0;
+        }
+    }
+
     private static SimulationMetrics simulate(SystemDesign design, HourlyConditions in, AnalysisOptions options,
                                               HourlyTrace tr) {
         Objects.requireNonNull(design, "design");
@@ -233,14 +268,15 @@ public final class YearSimulation {
         for (int i = 0; i < thresholds.length; i++) {
             thresholds[i] = options.socThresholds().get(i);
         }
-        final int[] below = new int[thresholds.length];
         final DamageCounter damage = options.aging().map(a -> new DamageCounter(a.cycleLife())).orElse(null);
+        final SocStatistics stats = new SocStatistics(thresholds, damage);
+        final double[] socBlock = thresholds.length > 0 || damage != null ? stats.block : null;
+        double lowestSoc = Double.POSITIVE_INFINITY;
 
         double e = bat.initialSoc() * eNom;
         boolean prevOn = false;
         // The state of charge goes to the rainflow counter in blocks, outside the hourly loop's body, which
         // keeps that body small (one array per run, not per hour).
-        final double[] socBlock = damage != null ? new double[SOC_BLOCK] : null;
         int blockFill = 0;
         if (damage != null) {
             damage.push(e / eNom);
@@ -267,7 +303,6 @@ public final class YearSimulation {
         double sumDump = 0;
         double sumGridLoad = 0;
         double sumGridChg = 0;
-        double lowestSoc = Double.POSITIVE_INFINITY;
         double soc = e / eNom;
 
         for (int t = 0; t < n; t++) {
@@ -405,15 +440,11 @@ public final class YearSimulation {
             if (soc < lowestSoc) {
                 lowestSoc = soc;
             }
-            for (int i = 0; i < thresholds.length; i++) {
-                if (soc < thresholds[i]) {
-                    below[i]++;
-                }
-            }
             if (socBlock != null) {
                 socBlock[blockFill++] = soc;
                 if (blockFill == SOC_BLOCK) {
-                    damage.pushAll(socBlock, blockFill);
+                    stats.fill = blockFill;
+                    stats.flush();
                     blockFill = 0;
                 }
             }
@@ -442,13 +473,14 @@ public final class YearSimulation {
             }
         }
 
+        stats.fill = blockFill;
+        stats.flush();
         List<SocThresholdHours> hoursBelow = new ArrayList<>(thresholds.length);
         for (int i = 0; i < thresholds.length; i++) {
-            hoursBelow.add(new SocThresholdHours(thresholds[i], below[i]));
+            hoursBelow.add(new SocThresholdHours(thresholds[i], stats.below[i]));
         }
         Optional<BatteryLife> life = Optional.empty();
         if (damage != null) {
-            damage.pushAll(socBlock, blockFill);
             damage.finish();
             double years = n == 8784 ? 1.0 : n / 8760.0;
             life = Optional.of(BatteryLife.of(damage.damage / years, options.aging().get().calendarLifeYears()));
