@@ -63,7 +63,8 @@ final class Scenarios {
         BatteryBank bank = new BatteryBank(lerp(500, 30000, u.get(9)), floor, ceiling, initial,
                 lerp(0.8, 1, u.get(10)), lerp(0.8, 1, u.get(11)), lerp(0, 5000, u.get(12)),
                 lerp(0, 5000, u.get(13)));
-        Charger charger = u.get(14) < 0.2 ? Charger.NONE : new Charger(lerp(0, 3000, u.get(15)), lerp(0.8, 1, u.get(16)));
+        Charger charger = u.get(14) < 0.2 ? Charger.NONE
+                : new Charger(lerp(0, 3000, u.get(15)), lerp(0.8, 1, u.get(16)));
 
         Optional<Generator> gen = Optional.empty();
         boolean wantGen = switch (choice) {
