@@ -324,4 +324,29 @@ class YearSimulationHandTest {
         assertThat(m.battery().dischargeWh()).isCloseTo(out, within(WH));
         assertThat(m.battery().equivalentFullCycles()).isCloseTo(out / 5000, within(1e-15));
     }
+
+    @Test
+    void batteryLifeScalesTheDamageOfAShortPeriodToAYear() {
+        // The two days are 48/8760 of a year: damage per year = Miner's sum of the two days * 8760/48.
+        // Cycles: rainflow of the state-of-charge series (initial 0.9, then each hour), as counted by the
+        // public Rainflow API. Calendar life 15 years; demo curve.
+        CycleLifeCurve curve = new CycleLifeCurve(new double[] {0.1, 1.0}, new double[] {10000, 1000});
+        SystemDesign design = new SystemDesign(CONTROLLER, QUADRATIC, BANK, Charger.NONE, Optional.empty());
+        TracedYear run = YearSimulation.runTraced(design, HourlyConditions.offGrid(twoDayLoad(), twoDayPv()),
+                new AnalysisOptions(List.of(), Optional.of(new BatteryAging(curve, 15))));
+        double[] history = new double[49];
+        history[0] = 0.9;
+        System.arraycopy(run.trace().soc(), 0, history, 1, 48);
+        double perYear = Rainflow.minerDamage(history, curve, YearSimulation.RAINFLOW_GATE_SOC) * 8760 / 48;
+        // By hand: turning points 0.9 (start), 0.54295 (end of night one), 1.0 (full from hour 12), 0.2
+        // (floor): halves 0.357, 0.457, 0.8. With N = 1000 * DoD^-1: damage per half = 0.5 * DoD / 1000.
+        double e7 = (4500 - 8 * 212 / 0.95) / 5000;
+        double byHand = 0.5 * ((0.9 - e7) + (1.0 - e7) + (1.0 - 0.2)) / 1000 * 8760 / 48;
+        BatteryLife life = run.metrics().battery().life().orElseThrow();
+        assertThat(life.cycleDamagePerYear()).isCloseTo(perYear, within(1e-12));
+        assertThat(life.cycleDamagePerYear()).isCloseTo(byHand, within(1e-9));
+        assertThat(life.cycleLifeYears()).isCloseTo(1 / byHand, within(1e-6));
+        assertThat(life.limitedBy())
+                .isEqualTo(1 / byHand < 15 ? BatteryLife.Limit.CYCLING : BatteryLife.Limit.CALENDAR);
+    }
 }
