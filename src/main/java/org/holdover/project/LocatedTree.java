@@ -91,6 +91,11 @@ final class LocatedTree {
             }
             return new LocatedTree(root, locations, file);
         } catch (JsonParseException e) {
+            String original = String.valueOf(e.getOriginalMessage());
+            if (original.startsWith("Malformed numeric value")) {
+                throw InputException.at(loc(e.getLocation(), file), "", firstLine(original).replace("Malformed numeric value",
+                        "not a plain finite number:"), "write a plain number such as 120 or 0.75");
+            }
             throw InputException.at(loc(e.getLocation(), file), "", "not valid " + (json ? "JSON" : "YAML")
                     + ": " + firstLine(e.getOriginalMessage()), "check indentation, colons and quotes");
         } catch (IOException | RuntimeException e) {

@@ -86,6 +86,13 @@ final class SheetWriter {
         return cell;
     }
 
+    /** A result whose value is text that is not a verdict (an identifier taken from another cell). */
+    Cell formulaName(int r, int c, String formula, String engineValue) {
+        Cell cell = formulaText(r, c, formula, engineValue);
+        cell.setCellStyle(styles.text);
+        return cell;
+    }
+
     void header(int r, int c, String... labels) {
         for (int i = 0; i < labels.length; i++) {
             text(r, c + i, labels[i], styles.header);

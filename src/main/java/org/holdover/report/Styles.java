@@ -95,6 +95,7 @@ final class Styles {
             s.setFillForegroundColor(IndexedColors.LIGHT_YELLOW.getIndex());
             s.setFillPattern(FillPatternType.SOLID_FOREGROUND);
             s.setDataFormat(wb.createDataFormat().getFormat(format));
+            s.setVerticalAlignment(VerticalAlignment.TOP);
             return s;
         });
     }
@@ -104,6 +105,7 @@ final class Styles {
         return cache.computeIfAbsent("out:" + format, k -> {
             CellStyle s = wb.createCellStyle();
             s.setDataFormat(wb.createDataFormat().getFormat(format));
+            s.setVerticalAlignment(VerticalAlignment.TOP);
             return s;
         });
     }
@@ -116,6 +118,7 @@ final class Styles {
             f.setBold(true);
             s.setFont(f);
             s.setAlignment(HorizontalAlignment.CENTER);
+            s.setVerticalAlignment(VerticalAlignment.TOP);
             return s;
         });
     }

@@ -18,20 +18,23 @@ final class SummarySheet {
     static void write(Context ctx, int bankRow) {
         SheetWriter s = ctx.sheet(Context.SUMMARY);
         SizingResult r = ctx.r;
-        s.widths(46, 14, 14, 8, 9, 10, 70);
+        s.widths(52, 18, 13, 7, 8, 9, 40);
         int row = 0;
         s.text(row++, 0, "Sizing summary: " + r.input().name(), ctx.styles.title);
-        s.text(row++, 0, (ctx.backup() ? "Backup system" : "Off-grid system") + ", " + service(ctx)
-                + ". Yellow cells are inputs; every other number is a live formula you can trace.", ctx.styles.note);
+        row = paragraph(ctx, s, row, (ctx.backup() ? "Backup system" : "Off-grid system") + ", " + service(ctx)
+                + ". Yellow cells are inputs; every other number is a live formula you can trace.");
         if (r.input().catalog().demoData()) {
-            s.text(row++, 0, "DEMO DATA: the components come from the built-in catalog of invented, generic units. Not a quote.", ctx.styles.bold);
+            row = paragraph(ctx, s, row, "DEMO DATA: the components come from the built-in catalog of invented, generic units. Not a quote.");
         }
         row++;
         if (r.chosen() == null) {
             s.text(row++, 0, "No system in the catalog passes every check.", ctx.styles.bold);
             for (BusOption b : r.buses()) {
                 s.text(row, 0, (long) b.busClassV() + " V bus");
-                s.text(row++, 1, b.reason());
+                s.text(row, 1, b.reason(), ctx.styles.wrap);
+                s.sheet.addMergedRegion(new org.apache.poi.ss.util.CellRangeAddress(row, row, 1, 6));
+                s.sheet.getRow(row).setHeightInPoints(32);
+                row++;
             }
         } else {
             row = system(ctx, s, row, bankRow);
@@ -79,24 +82,35 @@ final class SummarySheet {
             row++;
             s.text(row++, 0, "Input warnings", ctx.styles.subtitle);
             for (Problem p : warnings) {
-                s.text(row++, 0, p.oneLine());
+                row = paragraph(ctx, s, row, p.oneLine());
             }
         }
         if (!r.input().notes().isEmpty()) {
             row++;
             s.text(row++, 0, "Notes", ctx.styles.subtitle);
             for (String n : r.input().notes()) {
-                s.text(row++, 0, n);
+                row = paragraph(ctx, s, row, n);
             }
         }
         row++;
         s.text(row++, 0, "Cautions (in full on the Cautions sheet)", ctx.styles.subtitle);
         for (String c : Cautions.LINES) {
-            s.text(row, 0, c, ctx.styles.wrap);
-            s.sheet.addMergedRegion(new org.apache.poi.ss.util.CellRangeAddress(row, row, 0, 6));
-            s.sheet.getRow(row).setHeightInPoints(32);
-            row++;
+            row = paragraph(ctx, s, row, c);
         }
+    }
+
+    /** Long text across the page width, wrapped, with a row tall enough for it. */
+    static int paragraph(Context ctx, SheetWriter s, int row, String text) {
+        s.text(row, 0, text, ctx.styles.wrap);
+        s.sheet.addMergedRegion(new org.apache.poi.ss.util.CellRangeAddress(row, row, 0, 6));
+        s.sheet.getRow(row).setHeightInPoints(15f * Math.max(1, (int) Math.ceil(text.length() / 130.0)) + 2);
+        return row + 1;
+    }
+
+    /** Text from column C to the right edge, wrapped. */
+    private static void side(Context ctx, SheetWriter s, int row, String text) {
+        s.text(row, 2, text, ctx.styles.wrap);
+        s.sheet.addMergedRegion(new org.apache.poi.ss.util.CellRangeAddress(row, row, 2, 6));
     }
 
     private static String service(Context ctx) {
@@ -112,11 +126,11 @@ final class SummarySheet {
         s.text(row, 0, "DC bus voltage class, V");
         s.formula(row++, 1, "ChosenBusV", r.chosen().busClassV(), Styles.INT);
         s.text(row, 0, "Inverter");
-        s.formulaText(row, 1, "ChosenInvRow", r.inverter().spec().id());
-        s.text(row++, 2, r.inverter().spec().description());
+        s.formulaName(row, 1, "ChosenInvRow", r.inverter().spec().id());
+        side(ctx, s, row++, r.inverter().spec().description());
         s.text(row, 0, "Battery module");
-        s.formulaText(row, 1, bat.ref(bankRow, BatterySheet.ID), b.module().id());
-        s.text(row++, 2, b.module().description());
+        s.formulaName(row, 1, bat.ref(bankRow, BatterySheet.ID), b.module().id());
+        side(ctx, s, row++, b.module().description());
         s.text(row, 0, "Modules in series × parallel strings");
         s.formula(row, 1, bat.ref(bankRow, BatterySheet.SERIES), b.series(), Styles.INT);
         s.formula(row++, 2, bat.ref(bankRow, BatterySheet.STRINGS), b.strings(), Styles.INT);
@@ -147,7 +161,10 @@ final class SummarySheet {
         boolean atLeast = c.sense() == Check.Sense.AT_LEAST;
         s.formulaText(row, 4, "IF(B" + R + (atLeast ? ">=" : "<=") + "C" + R + ",\"pass\",\"FAIL\")", c.passes() ? "pass" : "FAIL");
         s.formula(row, 5, atLeast ? "B" + R + "/C" + R + "-1" : "1-B" + R + "/C" + R, c.margin(), Styles.PCT);
-        s.text(row, 6, c.basis());
+        s.text(row, 6, c.basis(), ctx.styles.wrap);
+        if (c.basis().length() > 44) {
+            s.sheet.getRow(row).setHeightInPoints(15f * (int) Math.ceil(c.basis().length() / 44.0) + 2);
+        }
         return row + 1;
     }
 

@@ -96,7 +96,7 @@ public final class WorkbookWriter {
             PrintSetup p = s.getPrintSetup();
             p.setFitWidth((short) 1);
             p.setFitHeight((short) 0);
-            p.setLandscape(!name.equals(Context.SUMMARY) && !name.equals(Context.CAUTIONS));
+            p.setLandscape(!name.equals(Context.CAUTIONS));
             p.setPaperSize(a4 ? PrintSetup.A4_PAPERSIZE : PrintSetup.LETTER_PAPERSIZE);
             s.setMargin(Sheet.LeftMargin, 0.5);
             s.setMargin(Sheet.RightMargin, 0.5);

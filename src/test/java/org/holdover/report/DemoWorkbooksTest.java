@@ -1,0 +1,92 @@
+package org.holdover.report;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.holdover.project.InputException;
+import org.holdover.project.ProjectReader;
+import org.holdover.sizing.ProjectAssembler;
+import org.holdover.sizing.Sizing;
+import org.holdover.sizing.SizingResult;
+import org.holdover.testing.Artifacts;
+import org.holdover.testing.ExternalTools;
+import org.holdover.testing.PaperRender;
+import org.holdover.testing.PoiRecalc;
+import org.holdover.testing.RecalcReport;
+import org.holdover.testing.SafeFunctions;
+import org.holdover.testing.SpreadsheetRecalc;
+import org.holdover.testing.Tolerance;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestInstance;
+
+/**
+ * The demo workbooks: every formula cell must recompute to the engine's cached value (relative 1e-9) in
+ * POI's evaluator and in a real spreadsheet application, use only functions both evaluate alike, and
+ * the summary must fit its page width when printed.
+ */
+@TestInstance(TestInstance.Lifecycle.PER_CLASS)
+class DemoWorkbooksTest {
+
+    static final List<String> DEMOS = List.of("examples/farm-shop-backup.yaml", "examples/ridge-cabin-offgrid.yaml");
+    private final List<Path> workbooks = new ArrayList<>();
+
+    @BeforeAll
+    void writeDemoWorkbooks() throws IOException, InputException {
+        Path dir = Artifacts.dir("demo-workbooks");
+        for (String demo : DEMOS) {
+            Path project = Path.of(demo);
+            SizingResult r = Sizing.run(ProjectAssembler.assemble(ProjectReader.read(project, demo)));
+            assertThat(r.passes()).as(demo + " passes every check").isTrue();
+            Path out = dir.resolve(project.getFileName().toString().replace(".yaml", ".xlsx"));
+            WorkbookWriter.write(r, out, true);
+            workbooks.add(out);
+        }
+    }
+
+    @Test
+    void poiRecomputesEveryFormulaToTheEngineValue() {
+        for (Path wb : workbooks) {
+            RecalcReport report = PoiRecalc.recalculate(wb);
+            assertThat(report.cells()).as("formula cells in " + wb.getFileName()).hasSizeGreaterThan(50_000);
+            System.out.println(report.summary(Tolerance.DEFAULT));
+            report.assertAgrees(Tolerance.DEFAULT);
+        }
+    }
+
+    @Test
+    void aSpreadsheetApplicationRecomputesEveryFormulaToTheEngineValue() {
+        ExternalTools.requireOffice();
+        for (RecalcReport report : SpreadsheetRecalc.recalculate(workbooks)) {
+            System.out.println(report.summary(Tolerance.DEFAULT));
+            report.assertAgrees(Tolerance.DEFAULT);
+        }
+    }
+
+    @Test
+    void onlyFunctionsBothEvaluatorsAgreeOn() throws IOException {
+        for (Path wb : workbooks) {
+            assertThat(SafeFunctions.unsafeFunctionUses(wb)).as(wb.getFileName().toString()).isEmpty();
+        }
+    }
+
+    @Test
+    void summaryPrintsWithinThePageWidth() throws IOException {
+        ExternalTools.requireOffice();
+        ExternalTools.requirePdfTools();
+        for (Path wb : workbooks) {
+            PaperRender.SheetFit fit = PaperRender.measureFit(wb, "Summary");
+            System.out.println(fit.describe());
+            fit.assertFitsPageWidth(0.6);
+            Path pdf = PaperRender.toPdf(wb);
+            Path png = PaperRender.pageToPng(pdf, 1, 60);
+            Path kept = Artifacts.dir("demo-pages").resolve(wb.getFileName().toString().replace(".xlsx", "-page1.png"));
+            Files.copy(png, kept, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+            assertThat(PaperRender.pageText(pdf, 1)).contains("Sizing summary");
+        }
+    }
+}
