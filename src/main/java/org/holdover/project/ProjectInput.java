@@ -18,6 +18,7 @@ import java.util.List;
  * @param catalog     {@code builtin} or the path of a user catalog file
  * @param rules       design rules (margins, limits)
  * @param wiring      cable runs, for the DC-side checks
+ * @param solar       the solar resource and PV array (optional)
  * @param notes       free text carried into the workbook as text
  */
 public record ProjectInput(
@@ -31,6 +32,7 @@ public record ProjectInput(
         String catalog,
         RulesInput rules,
         WiringInput wiring,
+        SolarInput solar,
         List<String> notes) {
 
     /** What the system is for. */
@@ -202,9 +204,37 @@ public record ProjectInput(
     }
 
     /**
-     * @param batteryToInverterM one-way cable length between battery and inverter, m
-     * @param maxVoltageDropPct  voltage-drop limit for DC circuits, %
+     * @param batteryToInverterM   one-way cable length between battery and inverter, m
+     * @param batteryToControllerM one-way cable length between battery and charge controller, m
+     * @param pvToControllerM      one-way length of the PV output circuit to the controller, m
+     * @param maxVoltageDropPct    voltage-drop limit for DC circuits, %
+     * @param conductorAmbientC    ambient around the conductors, °C
+     * @param standard             conductor tables: nec (AWG, NFPA 70) or iec (mm², IEC 60228 / 60364-5-52)
+     * @param fineStranded         battery cables are fine-stranded (flexible) conductors
      */
-    public record WiringInput(Double batteryToInverterM, Double maxVoltageDropPct) {
+    public record WiringInput(Double batteryToInverterM, Double batteryToControllerM, Double pvToControllerM,
+                              Double maxVoltageDropPct, Double conductorAmbientC, ConductorStandard standard,
+                              Boolean fineStranded) {
+    }
+
+    /** Which conductor tables to use. */
+    public enum ConductorStandard { NEC, IEC }
+
+    /**
+     * The solar resource and the PV array. Give monthly means from an atlas, or an hourly weather file.
+     *
+     * @param monthlyGhiKwhM2Day mean daily global horizontal irradiation by month, kWh/m²/day (12 values)
+     * @param monthlyAirTempC    mean air temperature by month, °C (12 values)
+     * @param weatherFile        an hourly weather file (EPW, or CSV with the documented header), relative path
+     * @param clearnessSeed      seed of the day-to-day clearness sequence (null: every day of a month alike)
+     * @param tiltDeg            array tilt from horizontal, ° (null: chosen to favour the worst month)
+     * @param azimuthDeg         array azimuth, ° clockwise from north (null: facing the equator)
+     * @param albedo             ground reflectance, 0–1
+     * @param controller         charge controller type to use: mppt or pwm (null: either)
+     * @param refillDays         backup: days to refill the bank after an outage while carrying the loads
+     */
+    public record SolarInput(List<Double> monthlyGhiKwhM2Day, List<Double> monthlyAirTempC, String weatherFile,
+                             Integer clearnessSeed, Double tiltDeg, Double azimuthDeg, Double albedo, String controller,
+                             Double refillDays) {
     }
 }

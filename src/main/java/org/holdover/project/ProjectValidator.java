@@ -130,7 +130,13 @@ public final class ProjectValidator {
         }
         if (p.wiring() != null) {
             rangeOpenLow("wiring.batteryToInverterM", p.wiring().batteryToInverterM(), 0, 100, "m");
+            rangeOpenLow("wiring.batteryToControllerM", p.wiring().batteryToControllerM(), 0, 100, "m");
+            rangeOpenLow("wiring.pvToControllerM", p.wiring().pvToControllerM(), 0, 500, "m");
             rangeOpenLow("wiring.maxVoltageDropPct", p.wiring().maxVoltageDropPct(), 0, 10, "%");
+            range("wiring.conductorAmbientC", p.wiring().conductorAmbientC(), -40, 70, "°C");
+        }
+        if (p.solar() != null) {
+            solar(p.solar());
         }
         if (p.notes() != null) {
             for (int i = 0; i < p.notes().size(); i++) {
@@ -159,6 +165,54 @@ public final class ProjectValidator {
             }
         }
         return n;
+    }
+
+    private void solar(ProjectInput.SolarInput s) {
+        boolean monthly = s.monthlyGhiKwhM2Day() != null || s.monthlyAirTempC() != null;
+        if (monthly && s.weatherFile() != null) {
+            error("solar.weatherFile", "both monthly means and a weather file are given", "give one of them");
+        }
+        if (!monthly && s.weatherFile() == null) {
+            error("solar", "gives no solar resource", "give monthlyGhiKwhM2Day and monthlyAirTempC (12 values each), or weatherFile");
+        }
+        if (monthly) {
+            twelve("solar.monthlyGhiKwhM2Day", s.monthlyGhiKwhM2Day(), 0, 12, "kWh/m²/day");
+            twelve("solar.monthlyAirTempC", s.monthlyAirTempC(), -60, 50, "°C");
+        }
+        if (s.weatherFile() != null) {
+            try {
+                InputFiles.checkReadable(project.resolve(s.weatherFile()), project.displayOf(s.weatherFile()), InputFiles.MAX_DATA_BYTES);
+            } catch (InputException e) {
+                error("solar.weatherFile", "cannot use \"" + s.weatherFile() + "\": " + e.problems().get(0).message(),
+                        "give the path of an EPW or CSV weather file relative to the project file");
+            }
+        }
+        range("solar.tiltDeg", s.tiltDeg(), 0, 90, "°");
+        range("solar.azimuthDeg", s.azimuthDeg(), 0, 360, "°");
+        range("solar.albedo", s.albedo(), 0, 1, "");
+        if (s.controller() != null && !List.of("mppt", "pwm").contains(s.controller().toLowerCase(Locale.ROOT))) {
+            error("solar.controller", "unknown controller type \"" + s.controller() + "\"", "mppt or pwm");
+        }
+        rangeOpenLow("solar.refillDays", s.refillDays(), 0, 30, "days");
+    }
+
+    private void twelve(String path, List<Double> values, double lo, double hi, String unit) {
+        if (values == null) {
+            error(path, "is missing", "12 values, January first");
+            return;
+        }
+        if (values.size() != 12) {
+            error(path, "has " + values.size() + " values", "12 values, January first");
+            return;
+        }
+        for (int i = 0; i < 12; i++) {
+            Double v = values.get(i);
+            if (v == null) {
+                error(path + "[" + i + "]", "is empty", "a number");
+            } else {
+                range(path + "[" + i + "]", v, lo, hi, unit);
+            }
+        }
     }
 
     private void site(ProjectInput.SiteInput s) {
