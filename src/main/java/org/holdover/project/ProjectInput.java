@@ -198,9 +198,10 @@ public record ProjectInput(
      * @param maxBatteryCurrentA     largest continuous battery current accepted when choosing the bus, A
      * @param motorsStartingTogether how many motors may start at the same moment (largest first)
      * @param maxParallelStrings     cap on parallel battery strings (null: chemistry default)
+     * @param busVoltageV            consider only this DC bus voltage class, V (null: choose)
      */
     public record RulesInput(Double inverterMargin, Double maxBatteryCurrentA, Integer motorsStartingTogether,
-                             Integer maxParallelStrings) {
+                             Integer maxParallelStrings, Double busVoltageV) {
     }
 
     /**

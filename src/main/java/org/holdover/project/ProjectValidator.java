@@ -124,6 +124,7 @@ public final class ProjectValidator {
                             "at most the number of motors (counting quantity)");
                 }
             }
+            rangeOpenLow("rules.busVoltageV", p.rules().busVoltageV(), 0, 1500, "V");
             if (p.rules().maxParallelStrings() != null && (p.rules().maxParallelStrings() < 1 || p.rules().maxParallelStrings() > 64)) {
                 error("rules.maxParallelStrings", "must be 1–64, got " + p.rules().maxParallelStrings(), "");
             }

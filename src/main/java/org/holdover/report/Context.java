@@ -19,13 +19,15 @@ final class Context {
     static final String CURVES = "Inverter curves";
     static final String BUS = "DC bus";
     static final String BATTERY = "Battery";
+    static final String WIRING = "Wiring";
     static final String HOURLY = "Hourly";
     static final String INPUTS = "Inputs";
     static final String TABLES = "Tables";
+    static final String CONDUCTORS = "Conductor tables";
     static final String CAUTIONS = "Cautions";
 
-    static final List<String> ORDER = List.of(SUMMARY, LOADS, MOTORS, DAYS, INVERTERS, CURVES, BUS, BATTERY, HOURLY,
-            INPUTS, TABLES, CAUTIONS);
+    static final List<String> ORDER = List.of(SUMMARY, LOADS, MOTORS, DAYS, INVERTERS, CURVES, BUS, BATTERY, WIRING, HOURLY,
+            INPUTS, TABLES, CONDUCTORS, CAUTIONS);
 
     final SXSSFWorkbook wb;
     final Styles styles;

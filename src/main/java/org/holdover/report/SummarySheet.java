@@ -196,6 +196,14 @@ final class SummarySheet {
             case "code.unitKwh" -> new String[] {B.apply(BatterySheet.MOD_V) + "*" + B.apply(BatterySheet.AH) + "/1000", "CodeUnitKwh"};
             case "code.utilityKwh" -> new String[] {B.apply(BatterySheet.KWH), "CodeUtilityKwh"};
             case "code.garageKwh" -> new String[] {B.apply(BatterySheet.KWH), "CodeGarageKwh"};
+            case "dc.cableTerminal" -> new String[] {"W_TerminalLimitA", "W_DesignA"};
+            case "dc.cableCorrected" -> new String[] {"W_CorrectedA", "W_CouA"};
+            case "dc.cableDrop" -> new String[] {"W_DropPct", "W_DropLimitPct"};
+            case "dc.fuseRating" -> new String[] {"W_DeviceA", "W_DesignA"};
+            case "dc.fuseProtects" -> new String[] {"W_DeviceA", "W_DeviceLimitA"};
+            case "dc.surgeV" -> new String[] {"W_SurgeInvV", "W_CutoffV"};
+            case "dc.surgeA" -> new String[] {"W_SurgeA", "W_PeakLimitA"};
+            case "dc.shortCircuit" -> new String[] {"W_ScA", "W_OrdinaryLimitA"};
             default -> throw new IllegalStateException("no workbook cells for check " + c.id() + " (" + c.label().toLowerCase(Locale.ROOT) + ")");
         };
     }

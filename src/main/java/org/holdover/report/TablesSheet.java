@@ -87,6 +87,12 @@ final class TablesSheet {
             r++;
         }
 
+        // Battery terminal model: open-circuit voltage and resistance against temperature
+        r += 1;
+        r = terminal(ctx, s, r, w0, org.holdover.battery.TerminalModel.OCV, "Ocv", "soc", "Rested cell voltage against state of charge, V");
+        r = terminal(ctx, s, r + 1, w0, org.holdover.battery.TerminalModel.RESISTANCE, "Rt", "temp",
+                "Internal resistance against temperature (× the 25 °C value)");
+
         // Residential energy-storage limits
         r += 1;
         s.text(r++, w0, "Residential energy-storage limits", ctx.styles.subtitle);
@@ -100,6 +106,26 @@ final class TablesSheet {
         s.text(r, w0, "Garage / outdoors, kWh");
         s.input(r, w0 + 1, Sizing.IRC_GARAGE_OUTDOOR_LIMIT_KWH, Styles.INT);
         s.name("CodeGarageKwh", r, w0 + 1);
+    }
+
+    private static int terminal(Context ctx, SheetWriter s, int r, int c0, org.holdover.battery.TerminalModel.Table t, String key,
+                                String xName, String title) {
+        s.text(r++, c0, title, ctx.styles.subtitle);
+        for (String line : t.source()) {
+            s.text(r++, c0, line, ctx.styles.note);
+        }
+        s.header(r++, c0, xName.equals("soc") ? "State of charge" : "°C", "Lead-acid", "LiFePO4");
+        int first = r;
+        for (int i = 0; i < t.x().length; i++) {
+            s.input(r, c0, t.x()[i], Styles.GENERAL);
+            s.input(r, c0 + 1, t.leadAcid()[i], Styles.D3);
+            s.input(r, c0 + 2, t.lifepo4()[i], Styles.D3);
+            r++;
+        }
+        s.name(key + "_" + xName, first, c0, r - 1, c0);
+        s.name(key + "_lead", first, c0 + 1, r - 1, c0 + 1);
+        s.name(key + "_lfp", first, c0 + 2, r - 1, c0 + 2);
+        return r;
     }
 
     private static void temperature(SheetWriter s, Context ctx, TemperatureTable t, int c0, String key, String title) {

@@ -66,6 +66,7 @@ public final class WorkbookWriter {
             Context ctx = new Context(wb, result);
             InputsSheet.write(ctx);
             TablesSheet.write(ctx);
+            ConductorTablesSheet.write(ctx);
             LoadsSheet.writeTable(ctx);
             MotorsSheet.write(ctx);
             DayGridSheet.write(ctx);
@@ -76,6 +77,7 @@ public final class WorkbookWriter {
             InvertersSheet.write(ctx, blocks);
             BusSheet.write(ctx);
             int bankRow = BatterySheet.write(ctx);
+            WiringSheet.write(ctx, bankRow, chosenDc(result));
             SummarySheet.write(ctx, bankRow);
             CautionsSheet.write(ctx);
             printSetup(ctx);
@@ -85,6 +87,13 @@ public final class WorkbookWriter {
         } finally {
             wb.close();
         }
+    }
+
+    private static org.holdover.sizing.DcDesign chosenDc(SizingResult r) {
+        if (r.chosen() == null) {
+            return null;
+        }
+        return r.chosen().banks().stream().filter(b -> b.design() == r.bank()).findFirst().orElseThrow().dc();
     }
 
     private static void printSetup(Context ctx) {

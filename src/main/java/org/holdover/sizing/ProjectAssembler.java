@@ -178,12 +178,48 @@ public final class ProjectAssembler {
             warnings.add(new Problem(org.holdover.project.SourceLocation.of(catalog.source()), "",
                     "the components are invented demo data", "use your own catalog for a real quote"));
         }
+        WiringRules wiring = wiring(p, assumptions, warnings, project);
         double outage = backup ? p.backup().outageHours() : 0;
         double days = backup ? 0 : p.offGrid().autonomyDays();
         return new SizingInput(p.name(), p.mode(), volts, site.ac().frequencyHz(), split, invAmbient, cold, margin, maxA,
                 maxParallel, chem, dod, eol, b == null ? null : b.location(), outage, days, loads, catalog, assumptions,
                 warnings, p.notes() == null ? List.of() : p.notes(), measured == null ? null : measured.hourlyW(), scale,
-                served);
+                served, wiring);
+    }
+
+    /** Default battery-cable run when the project gives none, m (common practice, no source). */
+    public static final double DEFAULT_BATTERY_CABLE_M = 3.0;
+    /** Default DC voltage-drop limit, % (common practice, no source; NEC informational notes suggest 3 % for branch circuits). */
+    public static final double DEFAULT_DC_DROP_PCT = 2.0;
+    /** Default conductor ambient, °C (the base of NEC Table 310.16). */
+    public static final double DEFAULT_CONDUCTOR_AMBIENT_C = 30.0;
+
+    private static WiringRules wiring(ProjectInput p, List<Assumption> assumptions, List<Problem> warnings, Project project) {
+        ProjectInput.WiringInput w = p.wiring();
+        Double len = w == null ? null : w.batteryToInverterM();
+        if (len == null) {
+            warnings.add(project.problemAt("wiring.batteryToInverterM", "not given; a " + (int) DEFAULT_BATTERY_CABLE_M
+                    + " m battery cable is assumed", "give the one-way cable length: the voltage at the inverter during a motor start depends on it"));
+        }
+        double length = len == null ? DEFAULT_BATTERY_CABLE_M : len;
+        assumptions.add(new Assumption("Battery–inverter cable, one way", length, "m", len == null ? "default" : "project",
+                len == null ? PRACTICE : "project"));
+        Double drop = w == null ? null : w.maxVoltageDropPct();
+        double dropPct = drop == null ? DEFAULT_DC_DROP_PCT : drop;
+        assumptions.add(new Assumption("DC voltage-drop limit at the continuous current", dropPct, "%",
+                drop == null ? "default" : "project", drop == null ? PRACTICE : "project"));
+        Double amb = w == null ? null : w.conductorAmbientC();
+        double ambient = amb == null ? DEFAULT_CONDUCTOR_AMBIENT_C : amb;
+        assumptions.add(new Assumption("Ambient around the conductors", ambient, "°C", amb == null ? "default" : "project",
+                amb == null ? "base ambient of NEC 2023 Table 310.16" : "project"));
+        ProjectInput.ConductorStandard std = w == null || w.standard() == null
+                ? (p.site().ac().frequencyHz() == 50.0 ? ProjectInput.ConductorStandard.IEC : ProjectInput.ConductorStandard.NEC)
+                : w.standard();
+        boolean fine = w != null && Boolean.TRUE.equals(w.fineStranded());
+        double bus = p.rules() != null && p.rules().busVoltageV() != null ? p.rules().busVoltageV() : 0;
+        return new WiringRules(length, dropPct, ambient,
+                std == ProjectInput.ConductorStandard.NEC ? org.holdover.dc.TableSystem.NEC : org.holdover.dc.TableSystem.IEC,
+                fine, bus);
     }
 
     private static String given(Object o) {

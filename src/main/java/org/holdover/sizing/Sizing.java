@@ -40,11 +40,17 @@ public final class Sizing {
         }
         TreeSet<Double> classes = new TreeSet<>();
         in.catalog().inverters().forEach(s -> classes.add(s.busClassV()));
+        if (in.wiring().busVoltageV() > 0) {
+            classes.removeIf(c -> c != in.wiring().busVoltageV());
+        }
         List<BusOption> buses = new ArrayList<>();
         BusOption chosen = null;
         EnergyBasis chosenEnergy = null;
         for (double cls : classes) {
-            BusWork w = busOption(cls, assessments, in);
+            List<Double> higher = new ArrayList<>(classes.tailSet(cls, false));
+            in.catalog().inverters().stream().map(InverterSpec::busClassV).filter(c -> c > cls && !higher.contains(c))
+                    .distinct().sorted().forEach(higher::add);
+            BusWork w = busOption(cls, assessments, in, higher.isEmpty() ? List.of() : List.of(higher.get(0)));
             BusOption option = w.option;
             if (option.passes() && chosen == null) {
                 chosen = new BusOption(option.busClassV(), option.inverter(), option.currentCheck(), option.energyDcWh(),
@@ -65,7 +71,12 @@ public final class Sizing {
         List<Check> checks = new ArrayList<>(inv.checks());
         checks.add(chosen.currentCheck());
         checks.addAll(bankChecks(bank, inv.spec(), chosenEnergy));
-        List<Check> advisories = fireCode(bank, in.location());
+        DcDesign dc = chosen.banks().stream().filter(b -> b.design() == bank).findFirst().orElseThrow().dc();
+        checks.addAll(dcChecks(dc));
+        List<Check> advisories = new ArrayList<>(fireCode(bank, in.location()));
+        advisories.add(new Check("dc.shortCircuit", "Prospective short-circuit current at the battery terminals",
+                dc.shortCircuit().atBatteryTerminalsA(), org.holdover.dc.ShortCircuit.COMMON_ORDINARY_DEVICE_LIMIT_A, "A",
+                Check.Sense.AT_MOST, "above this, use a DC device rated to interrupt it (common practice, no source)"));
         LossModel loss = inv.spec().loss();
         return new SizingResult(in, assessments, buses, chosen, chosenEnergy, bank.requirement(), checks, advisories,
                 WeightedEfficiency.CEC.of(loss), WeightedEfficiency.EURO.of(loss));
@@ -116,7 +127,7 @@ public final class Sizing {
     private record BusWork(BusOption option, EnergyBasis energy) {
     }
 
-    private static BusWork busOption(double cls, List<InverterAssessment> all, SizingInput in) {
+    private static BusWork busOption(double cls, List<InverterAssessment> all, SizingInput in, List<Double> higher) {
         List<InverterAssessment> atClass = all.stream().filter(a -> a.spec().busClassV() == cls).toList();
         List<InverterAssessment> passing = atClass.stream().filter(InverterAssessment::passes)
                 .sorted(Comparator.comparingDouble((InverterAssessment a) -> a.spec().price())
@@ -143,7 +154,9 @@ public final class Sizing {
                     continue;
                 }
                 BankDesign d = BankSizing.size(m, requirement(in, m.chemistry(), cls, energy, inv));
-                banks.add(new BankOption(d, incompatibility(d, inv.spec())));
+                String incompatible = incompatibility(d, inv.spec());
+                DcDesign dc = d.feasible() && incompatible.isEmpty() ? DcSide.evaluate(in, inv.spec(), d, higher) : null;
+                banks.add(new BankOption(d, incompatible, dc));
             }
             BankOption bank = banks.stream().filter(BankOption::usable)
                     .min(Comparator.comparingDouble((BankOption b) -> b.design().price())
@@ -155,13 +168,22 @@ public final class Sizing {
                 reason = String.format(Locale.ROOT, "continuous battery current %.0f A exceeds the %.0f A rule",
                         current.value(), current.limit());
             } else if (bank == null) {
-                reason = banks.isEmpty() ? "no battery module in the catalog makes a " + fmt(cls) + " V bank"
-                        : "no battery bank fits: " + banks.get(0).design().module().id() + ": " + banks.get(0).reason();
+                BankOption closest = banks.stream().filter(b -> b.dc() != null).findFirst()
+                        .orElse(banks.isEmpty() ? null : banks.get(0));
+                reason = closest == null ? "no battery module in the catalog makes a " + fmt(cls) + " V bank"
+                        : "no battery bank works: " + closest.design().module().id() + ": " + closest.reason();
+                if (closest != null && closest.dc() != null && !closest.dc().workingFixes().isEmpty()) {
+                    reason += "; any one of these would fix it: " + String.join("; ", closest.dc().workingFixes());
+                }
             } else {
                 reason = "passes";
             }
             BusWork w = new BusWork(new BusOption(cls, inv, current, energy.energyDcWh(), banks,
                     bank == null ? null : bank.design(), passes, reason), energy);
+            if (bank == null && firstTried != null && firstTried.option.banks().stream().noneMatch(b -> b.dc() != null)
+                    && banks.stream().anyMatch(b -> b.dc() != null)) {
+                firstTried = w;
+            }
             if (firstTried == null) {
                 firstTried = w;
             }
@@ -281,6 +303,41 @@ public final class Sizing {
         checks.add(new Check("bank.energy", "Usable energy after depth of discharge, temperature, aging and rate",
                 usable, e.energyDcWh(), "Wh", Check.Sense.AT_LEAST, "battery sizing chain"));
         return checks;
+    }
+
+    static List<Check> dcChecks(DcDesign dc) {
+        List<Check> out = new ArrayList<>();
+        org.holdover.dc.ConductorSelection.Sized cable = (org.holdover.dc.ConductorSelection.Sized) dc.cable();
+        org.holdover.dc.AmpacityStep a = cable.chosen().ampacity();
+        org.holdover.dc.VoltageDropStep v = cable.chosen().voltageDrop();
+        boolean nec = cable.chosen().size().system() == org.holdover.dc.TableSystem.NEC;
+        String size = cable.chosen().size().label() + (cable.chosen().parallelSets() > 1 ? " × " + cable.chosen().parallelSets() : "");
+        out.add(new Check("dc.cableTerminal", "Battery cable " + size + ": ampacity at the terminal rating", a.uncorrectedLimitA(),
+                a.designCurrentA(), "A", Check.Sense.AT_LEAST, nec ? "NEC 2023 110.14(C), 210.19(A)(1)(a): 1.25 × continuous current"
+                        : "IEC 60364-5-52: Iz ≥ Ib"));
+        out.add(new Check("dc.cableCorrected", "Battery cable " + size + ": ampacity after ambient correction",
+                a.correctedAmpacityA(), a.conditionsOfUseCurrentA(), "A", Check.Sense.AT_LEAST,
+                nec ? "NEC 2023 Table 310.16 × 310.15(B)(1)(1) ambient factor" : "IEC 60364-5-52 method C × B.52.14 × B.52.17"));
+        out.add(new Check("dc.cableDrop", "Battery cable voltage drop at the continuous current", v.dropPct(), v.limitPct(), "%",
+                Check.Sense.AT_MOST, "project limit (drop at the conductor's rated temperature)"));
+        org.holdover.dc.OvercurrentDevice.Rated d = cable.device();
+        out.add(new Check("dc.fuseRating", "Battery fuse or breaker rating", d.ratingA(), a.designCurrentA(), "A",
+                Check.Sense.AT_LEAST, nec ? "next standard rating, NEC 2023 240.6(A), at or above 1.25 × continuous current"
+                        : "IEC 60364-4-43: Ib ≤ In"));
+        out.add(new Check("dc.fuseProtects", "Fuse or breaker protects the battery cable", d.ratingA(), deviceLimit(d), "A",
+                Check.Sense.AT_MOST, nec ? "NEC 2023 240.4 (next size up, 240.4(B), only to 800 A)" : "IEC 60364-4-43: In ≤ Iz"));
+        org.holdover.dc.SurgeResult.Operating o = (org.holdover.dc.SurgeResult.Operating) dc.surge();
+        out.add(new Check("dc.surgeV", "Inverter DC voltage during the motor start (lowest charge, coldest battery)",
+                o.inverterTerminalV(), o.input().lowVoltageCutoffV(), "V", Check.Sense.AT_LEAST,
+                "inverter low-voltage cutoff; bank open-circuit voltage at the floor − current × (bank + cable resistance)"));
+        out.add(new Check("dc.surgeA", "Battery current during the motor start", o.currentA(), dc.peakLimitA(), "A",
+                Check.Sense.AT_MOST, "module short-time limit × strings"));
+        return out;
+    }
+
+    /** The largest rating that still protects the conductor: the allowable ampacity, or the next size up (≤ 800 A). */
+    public static double deviceLimit(org.holdover.dc.OvercurrentDevice.Rated d) {
+        return d.basis() == org.holdover.dc.OvercurrentDevice.Basis.NEXT_SIZE_UP ? d.ratingA() : d.allowableAmpacityA();
     }
 
     static List<Check> fireCode(BankDesign b, ProjectInput.BatteryLocation location) {

@@ -35,6 +35,7 @@ import org.holdover.project.ProjectInput;
  * @param measuredW         the measured profile as read, W per hour, or null
  * @param profileScale      scale applied to it
  * @param profileServed     whether the profile's loads are served (backup: critical)
+ * @param wiring            cable runs and conductor rules
  */
 public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms, double frequencyHz, boolean splitPhase,
                           double inverterAmbientC, double batteryColdestC, double inverterMargin,
@@ -42,12 +43,13 @@ public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms
                           Double endOfLife, ProjectInput.BatteryLocation location, double outageHours,
                           double autonomyDays, LoadAnalysis loads, Catalog catalog, List<Assumption> assumptions,
                           List<Problem> warnings, List<String> notes, double[] measuredW,
-                          double profileScale, boolean profileServed) {
+                          double profileScale, boolean profileServed, WiringRules wiring) {
     public SizingInput {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(mode, "mode");
         Objects.requireNonNull(loads, "loads");
         Objects.requireNonNull(catalog, "catalog");
+        Objects.requireNonNull(wiring, "wiring");
         assumptions = List.copyOf(assumptions);
         warnings = List.copyOf(warnings);
         notes = List.copyOf(notes);

@@ -35,6 +35,13 @@ class CommandLineTest {
     }
 
     @Test
+    void theTwelveVoltVariantFailsItsStartWithTheFixes(@TempDir Path dir) {
+        Cli r = Cli.run("size", "examples/variants/cabin-12v-well-pump.yaml", "-o", dir.resolve("v.xlsx").toString());
+        assertThat(r.exit).isEqualTo(Main.FAILS_CHECKS);
+        assertThat(r.out).contains("NO SYSTEM").contains("below its 10.5 V cutoff").contains("24 V bus").contains("soft starter");
+    }
+
+    @Test
     void checkWritesNothing(@TempDir Path dir) {
         Cli r = Cli.run("check", "examples/farm-shop-backup.yaml");
         assertThat(r.exit).isEqualTo(Main.OK);
