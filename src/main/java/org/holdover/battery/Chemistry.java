@@ -57,6 +57,21 @@ public enum Chemistry {
         this.noChargeBelowC = noChargeBelowC;
     }
 
+    /** Where each default comes from, for the workbook. */
+    public String sources() {
+        return switch (this) {
+            case FLOODED -> "DoD 50 %: typical lead-acid design figure (trade FAQ; never beyond 80 %, re-wrenches list 2011);"
+                    + " Peukert 1.2: figure for flooded batteries (sailnet forum, confirmed); round trip 80 %: vendor range 78-85 %;"
+                    + " end 1.75 V/cell, absorption 2.40 V/cell, at most 3 parallel strings: common practice, no source;"
+                    + " end of life 80 %: IEEE 485 aging factor 1.25 (from memory)";
+            case AGM -> "as flooded; Peukert 1.08: figure for AGM (sailnet forum, confirmed); round trip 85 %: vendor range";
+            case GEL -> "as flooded; Peukert 1.15 (from memory: 1.1-1.25); absorption 2.35 V/cell: common practice, no source";
+            case LIFEPO4 -> "DoD 80 %: residential figure 80-90 % (vendor FAQ); round trip 95 %: vendor range 92-98 %;"
+                    + " Peukert 1.05 (from memory: 1.02-1.05); 3.2 V nominal, end 2.8 V/cell, absorption 3.55 V/cell: common practice,"
+                    + " no source; end of life 80 %: common definition (from memory); no charging below 0 °C (from memory)";
+        };
+    }
+
     /** The word used in project and catalog files. */
     public String word() {
         return name().toLowerCase(Locale.ROOT);

@@ -93,6 +93,17 @@ final class SheetWriter {
         return cell;
     }
 
+    /**
+     * Long text across columns {@code c1}–{@code c2}, wrapped, with a row tall enough for about
+     * {@code charsPerLine} characters a line.
+     */
+    int paragraph(int r, int c1, int c2, String value, org.apache.poi.ss.usermodel.CellStyle style, int charsPerLine) {
+        text(r, c1, value, style);
+        sheet.addMergedRegion(new org.apache.poi.ss.util.CellRangeAddress(r, r, c1, c2));
+        sheet.getRow(r).setHeightInPoints(15f * Math.max(1, (int) Math.ceil(value.length() / (double) charsPerLine)) + 2);
+        return r + 1;
+    }
+
     void header(int r, int c, String... labels) {
         for (int i = 0; i < labels.length; i++) {
             text(r, c + i, labels[i], styles.header);

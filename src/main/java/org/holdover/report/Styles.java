@@ -35,6 +35,7 @@ final class Styles {
     final CellStyle text;
     final CellStyle wrap;
     final CellStyle note;
+    final CellStyle noteWrap;
     final CellStyle inputText;
     final CellStyle bold;
 
@@ -69,6 +70,10 @@ final class Styles {
         note = wb.createCellStyle();
         note.setFont(noteFont);
         note.setWrapText(false);
+        noteWrap = wb.createCellStyle();
+        noteWrap.setFont(noteFont);
+        noteWrap.setWrapText(true);
+        noteWrap.setVerticalAlignment(VerticalAlignment.TOP);
         inputText = wb.createCellStyle();
         inputText.cloneStyleFrom(text);
         inputText.setFont(inputFont());

@@ -101,10 +101,7 @@ final class SummarySheet {
 
     /** Long text across the page width, wrapped, with a row tall enough for it. */
     static int paragraph(Context ctx, SheetWriter s, int row, String text) {
-        s.text(row, 0, text, ctx.styles.wrap);
-        s.sheet.addMergedRegion(new org.apache.poi.ss.util.CellRangeAddress(row, row, 0, 6));
-        s.sheet.getRow(row).setHeightInPoints(15f * Math.max(1, (int) Math.ceil(text.length() / 130.0)) + 2);
-        return row + 1;
+        return s.paragraph(row, 0, 6, text, ctx.styles.wrap, 130);
     }
 
     /** Text from column C to the right edge, wrapped. */

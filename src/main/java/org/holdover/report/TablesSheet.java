@@ -44,7 +44,7 @@ final class TablesSheet {
         // Chemistry defaults (N–X)
         int c0 = 13;
         s.text(2, c0, "Chemistry defaults", ctx.styles.subtitle);
-        s.text(3, c0, "Sources: see each chemistry's row in the Inputs sheet notes and the project's documentation (DoD 50 % lead-acid, 80 % LiFePO4; end of life 80 %; Peukert exponents; common-practice values are marked there).", ctx.styles.note);
+        s.text(3, c0, "Each row's sources are written under the tables.", ctx.styles.note);
         s.header(4, c0, "Chemistry", "Cell V", "Cells per 12 V", "End V/cell", "Absorption V/cell", "Depth of discharge",
                 "End of life", "Peukert k", "Round trip", "Max parallel", "Lead-acid (1/0)");
         r = 5;
@@ -61,6 +61,11 @@ final class TablesSheet {
             s.input(r, c0 + 9, c.defaultMaxParallel(), Styles.INT);
             s.input(r, c0 + 10, c.leadAcid() ? 1 : 0, Styles.INT);
             r++;
+        }
+        int notes = NOTES_ROW + 24;
+        s.text(notes++, 0, "Chemistry defaults: sources", ctx.styles.subtitle);
+        for (Chemistry c : Chemistry.values()) {
+            s.text(notes++, 0, c.word() + ": " + c.sources(), ctx.styles.note);
         }
         String[] names = {"ChemWord", "ChemCellV", "ChemCellsPer12", "ChemEndV", "ChemAbsV", "ChemDod", "ChemEol", "ChemK",
             "ChemRte", "ChemMaxPar", "ChemLead"};

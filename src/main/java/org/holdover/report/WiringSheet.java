@@ -32,7 +32,7 @@ final class WiringSheet {
     /** Writes the sheet; names W_* cells the summary refers to. */
     static void write(Context ctx, int bankRow, DcDesign dc) {
         SheetWriter s = ctx.sheet(Context.WIRING);
-        s.widths(62, 16, 8, 70);
+        s.widths(56, 16, 8, 62);
         s.text(0, 0, "DC wiring and the battery during a motor start", ctx.styles.title);
         if (dc == null) {
             s.text(2, 0, "No system was chosen, so no wiring was sized.");
@@ -164,7 +164,7 @@ final class WiringSheet {
                 org.holdover.sizing.Sizing.deviceLimit(cable.device()), "A",
                 nec ? "the allowable ampacity, or the next standard rating above it (240.4(B), up to 800 A)" : "Iz", Styles.D1, "W_DeviceLimitA");
         for (String note : cable.notes()) {
-            s.text(r++, 0, note, ctx.styles.note);
+            r = s.paragraph(r, 0, 3, note, ctx.styles.noteWrap, 150);
         }
 
         r++;
@@ -276,8 +276,9 @@ final class WiringSheet {
         r = f(s, r, "At the inverter end of the cable", "W_VocFull/(W_BankOhmWarm+W_SurgeCableOhm)", sc.atCableEndA(), "A", "", Styles.INT, null);
         r = in(s, r, "What ordinary devices interrupt", ShortCircuit.COMMON_ORDINARY_DEVICE_LIMIT_A, "A", "common practice, no source",
                 Styles.INT, "W_OrdinaryLimitA");
-        s.text(r++, 0, "A device at the battery must be rated to interrupt this DC current; ordinary devices often interrupt no more than "
-                + (long) ShortCircuit.COMMON_ORDINARY_DEVICE_LIMIT_A + " A (common practice, no source): check the device's DC interrupting rating.", ctx.styles.note);
+        r = s.paragraph(r, 0, 3, "A device at the battery must be rated to interrupt this DC current; ordinary devices often interrupt no more than "
+                + (long) ShortCircuit.COMMON_ORDINARY_DEVICE_LIMIT_A + " A (common practice, no source): check the device's DC interrupting rating.",
+                ctx.styles.noteWrap, 150);
 
         r++;
         s.text(r++, 0, "Cautions for the DC wiring", ctx.styles.subtitle);
@@ -286,7 +287,7 @@ final class WiringSheet {
             "Put the overcurrent device and a disconnect at the battery, as close to its terminals as practical; the cable before it is unprotected.",
             "Fine-stranded (flexible) cable needs lugs and terminals identified for it (NEC 110.14); crimp with the right die and tool.",
             "Work on batteries with insulated tools; remove rings and watches. A qualified installer does this work; local code governs."}) {
-            s.text(r++, 0, c, ctx.styles.note);
+            r = s.paragraph(r, 0, 3, c, ctx.styles.noteWrap, 150);
         }
     }
 
