@@ -1,0 +1,162 @@
+package org.holdover.sizing;
+
+import java.util.Arrays;
+import java.util.Locale;
+import org.holdover.battery.BankDesign;
+import org.holdover.battery.BatteryModule;
+import org.holdover.battery.Chemistry;
+import org.holdover.inverter.LossModel;
+import org.holdover.load.LoadAnalysis;
+import org.holdover.project.ProjectInput;
+import org.holdover.sim.AnalysisOptions;
+import org.holdover.sim.BatteryBank;
+import org.holdover.sim.ChargeController;
+import org.holdover.sim.Charger;
+import org.holdover.sim.HourlyConditions;
+import org.holdover.sim.InverterLossModel;
+import org.holdover.sim.SimulationMetrics;
+import org.holdover.sim.SystemDesign;
+import org.holdover.sim.TracedYear;
+import org.holdover.sim.YearSimulation;
+
+/**
+ * The chosen system over a simulated year, hour by hour, and how it compares with the daily-energy chain.
+ *
+ * <p>The bank is simulated as designed for: at end of life and at its coldest (rated energy ÷ (temperature
+ * factor × aging factor)), between the floor set by the depth of discharge and full charge. Capacity
+ * ratings are measured on discharge, so the round-trip loss is charged on the way in (charge efficiency =
+ * round trip, discharge efficiency = 1), our own modelling choice. The year starts from the state of
+ * charge it ends with (one warm-up year), so the result does not depend on a guessed starting point.
+ * Backup: the grid carries the loads and recharges the bank (charger efficiency
+ * {@value #GRID_CHARGER_EFFICIENCY}, common practice, no source) except during the outage window the chain
+ * found hardest. Off-grid: the PV array and the battery alone.
+ *
+ * @param bank            the bank as simulated
+ * @param controller      the charge controller as simulated (efficiency 1 and no output without PV)
+ * @param inverter        the inverter loss model
+ * @param charger         the grid charger (none off grid)
+ * @param loadW           the served AC load each hour, W
+ * @param pvArrayW        the PV array's DC output each hour, W (zeros without PV)
+ * @param gridAvailable   the grid each hour (backup)
+ * @param chargeForbidden charging forbidden each hour (LiFePO4 below 0 °C)
+ * @param traced          the simulated year, hour by hour
+ * @param unmetLimitWh    the unmet energy the project accepts over the year, Wh
+ * @param bankScaleNeeded smallest multiple of the simulated bank that leaves no more than the limit unmet (NaN when
+ *                        no bank up to {@value #MAX_SCALE} × does)
+ */
+public record YearCheck(BatteryBank bank, ChargeController controller, InverterLossModel inverter, Charger charger,
+                        double[] loadW, double[] pvArrayW, boolean[] gridAvailable, boolean[] chargeForbidden,
+                        TracedYear traced, double unmetLimitWh, double bankScaleNeeded) {
+
+    public static final double GRID_CHARGER_EFFICIENCY = 0.90;
+    public static final double MAX_SCALE = 20;
+
+    public SimulationMetrics metrics() {
+        return traced.metrics();
+    }
+
+    /** The simulated year leaves no more unmet energy than the project accepts. */
+    public boolean passes() {
+        return metrics().reliability().unmetWh() <= unmetLimitWh + 1e-6;
+    }
+
+    /** The chain-versus-simulation comparison in words. */
+    public String comparison(BankDesign chain) {
+        double usableChain = bank.nominalEnergyWh() * (bank.ceilingSoc() - bank.floorSoc());
+        String year = String.format(Locale.ROOT, "the chain chose %.1f kWh of battery (%.1f kWh usable at end of life, cold); "
+                + "the simulated year with it leaves %.0f Wh unmet in %d h", chain.bankEnergyWh() / 1000.0, usableChain / 1000.0,
+                metrics().reliability().unmetWh(), metrics().reliability().unmetHours());
+        if (Double.isNaN(bankScaleNeeded)) {
+            return year + "; no battery up to " + (long) MAX_SCALE + " times larger removes it: more PV (or a generator) is needed";
+        }
+        return year + String.format(Locale.ROOT, "; %.1f kWh of battery (%.2f ×) is the least that leaves %s",
+                chain.bankEnergyWh() * bankScaleNeeded / 1000.0, bankScaleNeeded,
+                unmetLimitWh > 0 ? String.format(Locale.ROOT, "at most %.0f Wh unmet", unmetLimitWh) : "none unmet");
+    }
+
+    /**
+     * @param in        the sizing input
+     * @param bankDesign the chosen bank
+     * @param loss      the chosen inverter's loss model
+     * @param energy    the chain's energy basis (outage window)
+     * @param pvArrayW  the PV array's DC output each hour, or null without PV
+     * @param controllerEfficiency controller efficiency (1 without PV)
+     * @param controllerLimitW controller output limit, W (0 without PV)
+     * @param unmetLimitFraction accepted unmet energy as a fraction of the load
+     * @param batteryTempC battery temperature each hour, °C (null: no charging limit applies)
+     */
+    public static YearCheck run(SizingInput in, BankDesign bankDesign, LossModel loss, EnergyBasis energy, double[] pvArrayW,
+                                double controllerEfficiency, double controllerLimitW, double unmetLimitFraction,
+                                double[] batteryTempC) {
+        LoadAnalysis la = in.loads();
+        int n = la.calendar().hours();
+        BatteryModule m = bankDesign.module();
+        Chemistry c = m.chemistry();
+        double nominal = bankDesign.bankEnergyWh() / (bankDesign.temperatureFactor() * bankDesign.agingFactor());
+        double floor = 1.0 - bankDesign.requirement().depthOfDischarge();
+        double maxCharge = bankDesign.strings() * m.maxChargeA() * bankDesign.bankNominalV();
+        double maxDischarge = bankDesign.strings() * m.maxContinuousA() * bankDesign.bankNominalV();
+        InverterLossModel inv = new InverterLossModel(loss.ratedW(), loss.p0(), loss.k1(), loss.k2());
+        ChargeController cc = new ChargeController(controllerEfficiency, controllerLimitW);
+        boolean backup = in.mode() == ProjectInput.Mode.BACKUP;
+        Charger charger = backup ? new Charger(maxCharge / GRID_CHARGER_EFFICIENCY, GRID_CHARGER_EFFICIENCY) : Charger.NONE;
+        double[] pv = pvArrayW == null ? new double[n] : pvArrayW.clone();
+        boolean[] grid = new boolean[n];
+        if (backup) {
+            Arrays.fill(grid, true);
+            for (int h = energy.windowStartHour(); h < energy.windowStartHour() + energy.windowHours(); h++) {
+                grid[h] = false;
+            }
+        }
+        boolean[] forbidden = batteryTempC == null ? new boolean[n]
+                : HourlyConditions.chargeForbiddenBelow(batteryTempC, c.noChargeBelowC());
+        HourlyConditions cond = HourlyConditions.offGrid(la.loadW(), pv).withGridAvailable(grid).withChargeForbidden(forbidden);
+        double unmetLimit = unmetLimitFraction * sum(la.loadW());
+        BatteryBank first = new BatteryBank(nominal, floor, 1.0, 1.0, c.roundTripEfficiency(), 1.0, maxCharge, maxDischarge);
+        SystemDesign warm = new SystemDesign(cc, inv, first, charger, java.util.Optional.empty());
+        double start = YearSimulation.run(warm, cond, AnalysisOptions.NONE).battery().finalSoc();
+        start = Math.min(1.0, Math.max(floor, start));
+        BatteryBank bank = new BatteryBank(nominal, floor, 1.0, start, c.roundTripEfficiency(), 1.0, maxCharge, maxDischarge);
+        SystemDesign design = new SystemDesign(cc, inv, bank, charger, java.util.Optional.empty());
+        TracedYear traced = YearSimulation.runTraced(design, cond, AnalysisOptions.NONE);
+        double scale = scaleNeeded(design, cond, unmetLimit);
+        return new YearCheck(bank, cc, inv, charger, la.loadW().clone(), pv, grid, forbidden, traced, unmetLimit, scale);
+    }
+
+    /** Smallest bank multiple (bisection, 1 % resolution) leaving at most the limit unmet; NaN when none up to the maximum. */
+    static double scaleNeeded(SystemDesign design, HourlyConditions cond, double limitWh) {
+        BatteryBank b = design.battery();
+        if (unmet(design, cond, MAX_SCALE) > limitWh + 1e-6) {
+            return Double.NaN;
+        }
+        double lo = 0.0, hi = MAX_SCALE;
+        while (hi - lo > 0.005) {
+            double mid = (lo + hi) / 2;
+            if (mid > 0 && unmet(design, cond, mid) <= limitWh + 1e-6) {
+                hi = mid;
+            } else {
+                lo = mid;
+            }
+        }
+        return Math.ceil(hi * 100) / 100;
+    }
+
+    private static double unmet(SystemDesign design, HourlyConditions cond, double scale) {
+        BatteryBank b = design.battery();
+        BatteryBank s = new BatteryBank(b.nominalEnergyWh() * scale, b.floorSoc(), b.ceilingSoc(), b.ceilingSoc(),
+                b.chargeEfficiency(), b.dischargeEfficiency(), b.maxChargeW() * Math.max(1, scale), b.maxDischargeW() * Math.max(1, scale));
+        SystemDesign d = design.withBattery(s);
+        double start = YearSimulation.run(d, cond, AnalysisOptions.NONE).battery().finalSoc();
+        s = new BatteryBank(s.nominalEnergyWh(), s.floorSoc(), s.ceilingSoc(), Math.min(1.0, Math.max(s.floorSoc(), start)),
+                s.chargeEfficiency(), s.dischargeEfficiency(), s.maxChargeW(), s.maxDischargeW());
+        return YearSimulation.run(design.withBattery(s), cond, AnalysisOptions.NONE).reliability().unmetWh();
+    }
+
+    private static double sum(double[] v) {
+        double s = 0;
+        for (double x : v) {
+            s += x;
+        }
+        return s;
+    }
+}
