@@ -49,9 +49,13 @@ final class ConsoleSummary {
             }
             out.println("  checks:");
             for (Check c : r.checks()) {
-                out.printf(Locale.ROOT, "    %-4s %-66s %12s %s %-12s (margin %+.0f %%)%n", c.passes() ? "pass" : "FAIL",
+                out.printf(Locale.ROOT, "    %-4s %-72s %12s %s %-14s %s%n", c.passes() ? "pass" : "FAIL",
                         c.label(), num(c.value()), c.sense() == Check.Sense.AT_LEAST ? ">=" : "<=",
-                        num(c.limit()) + " " + c.unit(), 100 * c.margin());
+                        num(c.limit()) + " " + c.unit(), Double.isFinite(c.margin())
+                                ? String.format(Locale.ROOT, "(margin %+.0f %%)", 100 * c.margin()) : "");
+            }
+            if (r.year() != null) {
+                out.println("  year: " + r.year().comparison(r.bank()));
             }
             for (Check c : r.advisories()) {
                 if (!c.passes()) {

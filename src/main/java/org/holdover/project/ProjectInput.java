@@ -199,9 +199,10 @@ public record ProjectInput(
      * @param motorsStartingTogether how many motors may start at the same moment (largest first)
      * @param maxParallelStrings     cap on parallel battery strings (null: chemistry default)
      * @param busVoltageV            consider only this DC bus voltage class, V (null: choose)
+     * @param maxUnmetPct            unmet energy the simulated year may leave, % of the served energy (default 0)
      */
     public record RulesInput(Double inverterMargin, Double maxBatteryCurrentA, Integer motorsStartingTogether,
-                             Integer maxParallelStrings, Double busVoltageV) {
+                             Integer maxParallelStrings, Double busVoltageV, Double maxUnmetPct) {
     }
 
     /**

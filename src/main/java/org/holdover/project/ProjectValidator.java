@@ -125,6 +125,7 @@ public final class ProjectValidator {
                 }
             }
             rangeOpenLow("rules.busVoltageV", p.rules().busVoltageV(), 0, 1500, "V");
+            range("rules.maxUnmetPct", p.rules().maxUnmetPct(), 0, 50, "%");
             if (p.rules().maxParallelStrings() != null && (p.rules().maxParallelStrings() < 1 || p.rules().maxParallelStrings() > 64)) {
                 error("rules.maxParallelStrings", "must be 1–64, got " + p.rules().maxParallelStrings(), "");
             }

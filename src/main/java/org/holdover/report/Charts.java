@@ -75,6 +75,60 @@ final class Charts {
         chart.plot(data);
     }
 
+    /**
+     * State of charge over the hardest week: the week ending with the outage window (backup) or around the
+     * lowest state of charge of the year (off grid).
+     */
+    static void stateOfCharge(Context ctx, SheetWriter s, org.holdover.sizing.YearCheck y, int firstRow) {
+        double[] soc = y.traced().trace().soc();
+        int n = soc.length;
+        int centre;
+        if (ctx.backup() && ctx.r.energy() != null) {
+            centre = ctx.r.energy().windowStartHour() + ctx.r.energy().windowHours() / 2;
+        } else {
+            centre = 0;
+            for (int h = 1; h < n; h++) {
+                if (soc[h] < soc[centre]) {
+                    centre = h;
+                }
+            }
+        }
+        int from = Math.max(0, Math.min(n - 168, centre - 84));
+        Double[] xs = new Double[168];
+        Double[] ys = new Double[168];
+        for (int i = 0; i < 168; i++) {
+            xs[i] = (double) (from + i);
+            ys[i] = soc[from + i];
+        }
+        XSSFDrawing d = drawing(s);
+        XSSFClientAnchor anchor = d.createAnchor(0, 0, 0, 0, 15, 2, 27, 23);
+        XSSFChart chart = d.createChart(anchor);
+        chart.setTitleText("State of charge over the hardest week (hours " + from + "–" + (from + 167) + ")");
+        chart.setTitleOverlay(false);
+        XDDFValueAxis x = chart.createValueAxis(AxisPosition.BOTTOM);
+        x.setTitle("Hour of the year");
+        XDDFValueAxis yAxis = chart.createValueAxis(AxisPosition.LEFT);
+        yAxis.setTitle("State of charge");
+        yAxis.setCrosses(AxisCrosses.AUTO_ZERO);
+        yAxis.setMinimum(0);
+        yAxis.setMaximum(1);
+        XDDFNumericalDataSource<Double> xsrc = XDDFDataSourcesFactory.fromArray(xs, s.ref(firstRow + from, 0, firstRow + from + 167, 0), 0);
+        XDDFNumericalDataSource<Double> ysrc = XDDFDataSourcesFactory.fromArray(ys, s.ref(firstRow + from, 25, firstRow + from + 167, 25), 25);
+        XDDFScatterChartData data = (XDDFScatterChartData) chart.createData(ChartTypes.SCATTER, x, yAxis);
+        data.setStyle(ScatterStyle.LINE);
+        XDDFScatterChartData.Series series = (XDDFScatterChartData.Series) data.addSeries(xsrc, ysrc);
+        series.setTitle("State of charge", null);
+        series.setMarkerStyle(MarkerStyle.NONE);
+        series.setSmooth(false);
+        XDDFShapeProperties line = new XDDFShapeProperties();
+        XDDFLineProperties lp = new XDDFLineProperties();
+        lp.setFillProperties(new XDDFSolidFillProperties(XDDFColor.from(PresetColor.STEEL_BLUE)));
+        lp.setWidth(1.5);
+        line.setLineProperties(lp);
+        series.setShapeProperties(line);
+        chart.plot(data);
+    }
+
     /** Efficiency against load: the catalog points and the fitted model (Inverter curves sheet). */
     static void efficiency(Context ctx, SheetWriter s, InverterSpec spec, int firstPoint, int lastPoint, int anchorRow) {
         LossModel loss = spec.loss();

@@ -21,12 +21,13 @@ final class Context {
     static final String BATTERY = "Battery";
     static final String WIRING = "Wiring";
     static final String HOURLY = "Hourly";
+    static final String SIMULATION = "Year simulation";
     static final String INPUTS = "Inputs";
     static final String TABLES = "Tables";
     static final String CONDUCTORS = "Conductor tables";
     static final String CAUTIONS = "Cautions";
 
-    static final List<String> ORDER = List.of(SUMMARY, LOADS, MOTORS, DAYS, INVERTERS, CURVES, BUS, BATTERY, WIRING, HOURLY,
+    static final List<String> ORDER = List.of(SUMMARY, LOADS, MOTORS, DAYS, INVERTERS, CURVES, BUS, BATTERY, WIRING, HOURLY, SIMULATION,
             INPUTS, TABLES, CONDUCTORS, CAUTIONS);
 
     final SXSSFWorkbook wb;
@@ -40,7 +41,7 @@ final class Context {
         this.styles = new Styles(wb);
         for (String name : ORDER) {
             SXSSFSheet s = wb.createSheet(name);
-            if (!name.equals(HOURLY)) {
+            if (!name.equals(HOURLY) && !name.equals(SIMULATION)) {
                 s.setRandomAccessWindowSize(-1);
             }
             sheets.put(name, new SheetWriter(wb, s, styles));

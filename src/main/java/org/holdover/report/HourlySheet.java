@@ -15,6 +15,13 @@ import org.holdover.sizing.EnergyBasis;
 final class HourlySheet {
 
     private static final LocalDate EXCEL_EPOCH = LocalDate.of(1899, 12, 30);
+    /** First data row (0-based). */
+    static final int FIRST = 4;
+
+    /** Column of the served load. */
+    static int loadColumn(Context ctx) {
+        return ctx.hasProfile() ? 6 : 5;
+    }
 
     private HourlySheet() {
     }

@@ -37,6 +37,8 @@ final class InputsSheet {
         } else {
             r = row(s, r, "AutonomyDays", "Days of autonomy", in.autonomyDays(), "days", "project", "", Styles.D2);
         }
+        r = row(s, r, "MaxUnmetFraction", "Unmet energy the simulated year may leave (fraction of the served energy)",
+                in.maxUnmetFraction(), "", given(in, "Unmet energy the simulated year"), source(in, "Unmet energy the simulated year"), "0.00%");
         r = row(s, r, "Year", "Calendar year of the hourly series", ctx.r.input().loads().calendar().year(), "",
                 given(in, "Calendar year"), "weekdays and leap year follow it", Styles.GENERAL);
         if (ctx.hasProfile()) {

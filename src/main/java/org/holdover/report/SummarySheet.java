@@ -67,9 +67,12 @@ final class SummarySheet {
             for (Check c : r.checks()) {
                 row = check(ctx, s, row, c, bankRow);
             }
+            int lastCheck = row - 1;
             s.text(row, 0, "Overall", ctx.styles.bold);
-            s.formulaText(row++, 4, "IF(COUNTIF(" + SheetWriter.addr(firstCheck, 4) + ":" + SheetWriter.addr(row - 2, 4)
+            s.formulaText(row++, 4, "IF(COUNTIF(" + SheetWriter.addr(firstCheck, 4) + ":" + SheetWriter.addr(lastCheck, 4)
                     + ",\"FAIL\")=0,\"pass\",\"FAIL\")", r.passes() ? "pass" : "FAIL");
+            row = paragraph(ctx, s, row, r.year() == null ? "The year was not simulated: an off-grid system needs its PV array for that."
+                    : "Daily-energy chain against the simulated year: " + r.year().comparison(r.bank()) + ".");
             row++;
             s.text(row++, 0, "Code limits to look at (they do not reject the design; the authority having jurisdiction decides)", ctx.styles.subtitle);
             s.header(row++, 0, "Limit", "Design value", "Limit", "Unit", "Result", "Margin", "Basis");
@@ -157,7 +160,11 @@ final class SummarySheet {
         s.text(row, 3, c.unit());
         boolean atLeast = c.sense() == Check.Sense.AT_LEAST;
         s.formulaText(row, 4, "IF(B" + R + (atLeast ? ">=" : "<=") + "C" + R + ",\"pass\",\"FAIL\")", c.passes() ? "pass" : "FAIL");
-        s.formula(row, 5, atLeast ? "B" + R + "/C" + R + "-1" : "1-B" + R + "/C" + R, c.margin(), Styles.PCT);
+        if (c.limit() == 0) {
+            s.formulaText(row, 5, "IF(C" + R + "=0,\"n/a\",\"see value\")", "n/a");
+        } else {
+            s.formula(row, 5, atLeast ? "B" + R + "/C" + R + "-1" : "1-B" + R + "/C" + R, c.margin(), Styles.PCT);
+        }
         s.text(row, 6, c.basis(), ctx.styles.wrap);
         if (c.basis().length() > 44) {
             s.sheet.getRow(row).setHeightInPoints(15f * (int) Math.ceil(c.basis().length() / 44.0) + 2);
@@ -201,6 +208,7 @@ final class SummarySheet {
             case "dc.surgeV" -> new String[] {"W_SurgeInvV", "W_CutoffV"};
             case "dc.surgeA" -> new String[] {"W_SurgeA", "W_PeakLimitA"};
             case "dc.shortCircuit" -> new String[] {"W_ScA", "W_OrdinaryLimitA"};
+            case "sim.unmet" -> new String[] {"S_UnmetWh", "S_UnmetLimit"};
             default -> throw new IllegalStateException("no workbook cells for check " + c.id() + " (" + c.label().toLowerCase(Locale.ROOT) + ")");
         };
     }

@@ -72,6 +72,7 @@ public final class WorkbookWriter {
             DayGridSheet.write(ctx);
             List<CurvesSheet.Block> blocks = CurvesSheet.write(ctx);
             HourlySheet.write(ctx);
+            SimulationSheet.write(ctx, result.year());
             LoadsSheet.writeFigures(ctx);
             MotorsSheet.writeSurge(ctx);
             InvertersSheet.write(ctx, blocks);

@@ -28,8 +28,14 @@ public final class HourlyTrace {
     final double[] gridToChargerW;
     final double[] chargerToBatteryW;
     final double[] unmetW;
+    final double[] batteryAcceptW;
+    final double[] inverterDemandW;
+    final double[] batteryAvailableW;
 
     HourlyTrace(int n) {
+        batteryAcceptW = new double[n];
+        inverterDemandW = new double[n];
+        batteryAvailableW = new double[n];
         storedWh = new double[n];
         soc = new double[n];
         pvControllerW = new double[n];
@@ -51,6 +57,21 @@ public final class HourlyTrace {
         gridToChargerW = new double[n];
         chargerToBatteryW = new double[n];
         unmetW = new double[n];
+    }
+
+    /** DC power the battery could take each hour (step 4), W. */
+    public double[] batteryAcceptW() {
+        return batteryAcceptW.clone();
+    }
+
+    /** Inverter DC input the whole load would need (step 5; 0 in grid hours), W. */
+    public double[] inverterDemandW() {
+        return inverterDemandW.clone();
+    }
+
+    /** Battery output available above the reserve (step 7; 0 in grid hours), W. */
+    public double[] batteryAvailableW() {
+        return batteryAvailableW.clone();
     }
 
     /** Number of hours. */

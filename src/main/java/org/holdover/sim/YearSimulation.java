@@ -333,6 +333,8 @@ public final class YearSimulation {
                 double genLoad = 0;
                 double dump = 0;
                 double gridLoad = 0;
+                double demand = 0;
+                double available = 0;
                 if (gridUp[t]) {
                     gridLoad = l;
                     pvInv = 0;
@@ -350,6 +352,8 @@ public final class YearSimulation {
                     final double r = d - pvInv0;
                     final double s = pv - pvInv0;
                     final double avail1 = min(pD, max(0, (e - eRes) * etaD));
+                    demand = d;
+                    available = avail1;
                     final double d1 = min(r, avail1);
                     final double r1 = r - d1;
                     final double a1 = pvInv0 + d1;
@@ -472,6 +476,9 @@ public final class YearSimulation {
                     tr.gridToChargerW[t] = on ? 0 : chgIn;
                     tr.chargerToBatteryW[t] = chgOut;
                     tr.unmetW[t] = unmet;
+                    tr.batteryAcceptW[t] = acc;
+                    tr.inverterDemandW[t] = demand;
+                    tr.batteryAvailableW[t] = available;
                 }
             }
             if (socBlock != null) {

@@ -184,7 +184,19 @@ public final class ProjectAssembler {
         return new SizingInput(p.name(), p.mode(), volts, site.ac().frequencyHz(), split, invAmbient, cold, margin, maxA,
                 maxParallel, chem, dod, eol, b == null ? null : b.location(), outage, days, loads, catalog, assumptions,
                 warnings, p.notes() == null ? List.of() : p.notes(), measured == null ? null : measured.hourlyW(), scale,
-                served, wiring);
+                served, wiring, unmet(p, assumptions), designTemp(site, cold));
+    }
+
+    private static double unmet(ProjectInput p, List<Assumption> assumptions) {
+        Double pct = p.rules() == null ? null : p.rules().maxUnmetPct();
+        double v = pct == null ? 0.0 : pct;
+        assumptions.add(new Assumption("Unmet energy the simulated year may leave", v, "% of served energy",
+                pct == null ? "default" : "project", pct == null ? "none: every served hour must be carried" : "project"));
+        return v / 100.0;
+    }
+
+    private static double designTemp(ProjectInput.SiteInput site, double cold) {
+        return site.batteryAmbientC() != null && site.batteryAmbientC().design() != null ? site.batteryAmbientC().design() : Math.max(cold, DEFAULT_TEMP_C);
     }
 
     /** Default battery-cable run when the project gives none, m (common practice, no source). */

@@ -64,7 +64,7 @@ public final class Sizing {
             buses.add(option);
         }
         if (chosen == null) {
-            return new SizingResult(in, assessments, buses, null, null, null, List.of(), List.of(), 0, 0);
+            return new SizingResult(in, assessments, buses, null, null, null, List.of(), List.of(), 0, 0, null);
         }
         InverterAssessment inv = chosen.inverter();
         BankDesign bank = chosen.bank();
@@ -78,8 +78,17 @@ public final class Sizing {
                 dc.shortCircuit().atBatteryTerminalsA(), org.holdover.dc.ShortCircuit.COMMON_ORDINARY_DEVICE_LIMIT_A, "A",
                 Check.Sense.AT_MOST, "above this, use a DC device rated to interrupt it (common practice, no source)"));
         LossModel loss = inv.spec().loss();
+        double[] batteryTemp = new double[in.loads().calendar().hours()];
+        java.util.Arrays.fill(batteryTemp, in.batteryDesignC());
+        YearCheck year = null;
+        if (in.mode() == ProjectInput.Mode.BACKUP) {
+            // Without PV an off-grid year has nothing to recharge the bank: it is simulated once the array is known.
+            year = YearCheck.run(in, bank, loss, chosenEnergy, null, 1.0, YearCheck.NO_PV_LIMIT_W, in.maxUnmetFraction(), batteryTemp);
+            checks.add(new Check("sim.unmet", "Unmet energy over the simulated year", year.metrics().reliability().unmetWh(),
+                    year.unmetLimitWh(), "Wh", Check.Sense.AT_MOST, "project reliability target; hour-by-hour energy balance"));
+        }
         return new SizingResult(in, assessments, buses, chosen, chosenEnergy, bank.requirement(), checks, advisories,
-                WeightedEfficiency.CEC.of(loss), WeightedEfficiency.EURO.of(loss));
+                WeightedEfficiency.CEC.of(loss), WeightedEfficiency.EURO.of(loss), year);
     }
 
     static InverterAssessment assess(InverterSpec s, SizingInput in) {

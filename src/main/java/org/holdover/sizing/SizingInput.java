@@ -36,6 +36,8 @@ import org.holdover.project.ProjectInput;
  * @param profileScale      scale applied to it
  * @param profileServed     whether the profile's loads are served (backup: critical)
  * @param wiring            cable runs and conductor rules
+ * @param maxUnmetFraction  unmet energy the simulated year may leave, fraction of the served energy
+ * @param batteryDesignC    typical battery temperature, °C (charging limits in the simulated year)
  */
 public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms, double frequencyHz, boolean splitPhase,
                           double inverterAmbientC, double batteryColdestC, double inverterMargin,
@@ -43,7 +45,8 @@ public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms
                           Double endOfLife, ProjectInput.BatteryLocation location, double outageHours,
                           double autonomyDays, LoadAnalysis loads, Catalog catalog, List<Assumption> assumptions,
                           List<Problem> warnings, List<String> notes, double[] measuredW,
-                          double profileScale, boolean profileServed, WiringRules wiring) {
+                          double profileScale, boolean profileServed, WiringRules wiring,
+                          double maxUnmetFraction, double batteryDesignC) {
     public SizingInput {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(mode, "mode");

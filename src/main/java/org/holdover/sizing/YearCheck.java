@@ -50,6 +50,8 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
 
     public static final double GRID_CHARGER_EFFICIENCY = 0.90;
     public static final double MAX_SCALE = 20;
+    /** Controller output limit used when there is no PV array (it limits nothing), W. */
+    public static final double NO_PV_LIMIT_W = 1e6;
 
     public SimulationMetrics metrics() {
         return traced.metrics();
