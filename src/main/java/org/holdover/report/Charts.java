@@ -129,6 +129,39 @@ final class Charts {
         chart.plot(data);
     }
 
+    /** Monthly energy flows of the simulated year: load, PV out and unmet, one bar group per month. */
+    static void monthlyFlows(Context ctx, SheetWriter s, int firstRow, int anchorRow, double[][] monthly) {
+        XSSFDrawing d = drawing(s);
+        XSSFClientAnchor anchor = d.createAnchor(0, 0, 0, 0, 0, anchorRow, 10, anchorRow + 20);
+        XSSFChart chart = d.createChart(anchor);
+        chart.setTitleText("Monthly energy of the simulated year, Wh");
+        chart.setTitleOverlay(false);
+        chart.getOrAddLegend().setPosition(LegendPosition.BOTTOM);
+        XDDFCategoryAxis x = chart.createCategoryAxis(AxisPosition.BOTTOM);
+        XDDFValueAxis y = chart.createValueAxis(AxisPosition.LEFT);
+        y.setCrosses(AxisCrosses.AUTO_ZERO);
+        XDDFDataSource<String> cats = XDDFDataSourcesFactory.fromArray(LoadsSheet.MONTHS.clone(), s.ref(firstRow, 0, firstRow + 11, 0), 0);
+        XDDFBarChartData data = (XDDFBarChartData) chart.createData(ChartTypes.BAR, x, y);
+        data.setBarDirection(BarDirection.COL);
+        int[] keys = {0, 4, 2};
+        String[] names = {"Load", "PV out", "Unmet"};
+        PresetColor[] colors = {PresetColor.STEEL_BLUE, PresetColor.GOLDENROD, PresetColor.FIREBRICK};
+        for (int i = 0; i < keys.length; i++) {
+            Double[] v = new Double[12];
+            for (int m = 0; m < 12; m++) {
+                v[m] = monthly[keys[i]][m];
+            }
+            int col = 1 + keys[i];
+            XDDFNumericalDataSource<Double> vals = XDDFDataSourcesFactory.fromArray(v, s.ref(firstRow, col, firstRow + 11, col), col);
+            XDDFChartData.Series series = data.addSeries(cats, vals);
+            series.setTitle(names[i], null);
+            XDDFShapeProperties props = new XDDFShapeProperties();
+            props.setFillProperties(new XDDFSolidFillProperties(XDDFColor.from(colors[i])));
+            series.setShapeProperties(props);
+        }
+        chart.plot(data);
+    }
+
     /** Efficiency against load: the catalog points and the fitted model (Inverter curves sheet). */
     static void efficiency(Context ctx, SheetWriter s, InverterSpec spec, int firstPoint, int lastPoint, int anchorRow) {
         LossModel loss = spec.loss();

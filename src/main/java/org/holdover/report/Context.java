@@ -22,12 +22,13 @@ final class Context {
     static final String WIRING = "Wiring";
     static final String HOURLY = "Hourly";
     static final String SIMULATION = "Year simulation";
+    static final String MONTHLY = "Monthly";
     static final String INPUTS = "Inputs";
     static final String TABLES = "Tables";
     static final String CONDUCTORS = "Conductor tables";
     static final String CAUTIONS = "Cautions";
 
-    static final List<String> ORDER = List.of(SUMMARY, LOADS, MOTORS, DAYS, INVERTERS, CURVES, BUS, BATTERY, WIRING, HOURLY, SIMULATION,
+    static final List<String> ORDER = List.of(SUMMARY, LOADS, MOTORS, DAYS, INVERTERS, CURVES, BUS, BATTERY, WIRING, HOURLY, SIMULATION, MONTHLY,
             INPUTS, TABLES, CONDUCTORS, CAUTIONS);
 
     final SXSSFWorkbook wb;

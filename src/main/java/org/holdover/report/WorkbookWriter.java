@@ -73,6 +73,7 @@ public final class WorkbookWriter {
             List<CurvesSheet.Block> blocks = CurvesSheet.write(ctx);
             HourlySheet.write(ctx);
             SimulationSheet.write(ctx, result.year());
+            MonthlySheet.write(ctx, result.year());
             LoadsSheet.writeFigures(ctx);
             MotorsSheet.writeSurge(ctx);
             InvertersSheet.write(ctx, blocks);

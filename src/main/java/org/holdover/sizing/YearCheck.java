@@ -57,6 +57,34 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
         return traced.metrics();
     }
 
+    /** Monthly sums, Wh, rows in this order. */
+    public static final java.util.List<String> MONTHLY_ROWS = java.util.List.of("load", "served", "unmet", "pvArray", "pvOut",
+            "pvCurtailed", "intoBank", "outOfBank", "gridToLoad");
+
+    /**
+     * The year's flows by month, Wh: one row per entry of {@link #MONTHLY_ROWS}, twelve months each.
+     *
+     * @param cal the year's calendar
+     */
+    public double[][] monthlyWh(org.holdover.load.YearCalendar cal) {
+        org.holdover.sim.HourlyTrace t = traced.trace();
+        double[][] series = {loadW, null, t.unmetW(), pvArrayW, t.pvControllerW(), t.pvCurtailedW(), t.batteryChargeW(),
+            t.batteryToInverterW(), t.gridToLoadW()};
+        double[][] out = new double[series.length][12];
+        for (int k = 0; k < series.length; k++) {
+            if (series[k] == null) {
+                continue;
+            }
+            for (int h = 0; h < cal.hours(); h++) {
+                out[k][cal.month(h) - 1] += series[k][h];
+            }
+        }
+        for (int m = 0; m < 12; m++) {
+            out[1][m] = out[0][m] - out[2][m];
+        }
+        return out;
+    }
+
     /** The simulated year leaves no more unmet energy than the project accepts. */
     public boolean passes() {
         return metrics().reliability().unmetWh() <= unmetLimitWh + 1e-6;
