@@ -57,6 +57,29 @@ public enum Chemistry {
         this.noChargeBelowC = noChargeBelowC;
     }
 
+    /**
+     * Cycles to end of life against depth of discharge, {depth[], cycles[]}. FROM MEMORY: typical shapes of
+     * makers' cycle-life curves for each family; unconfirmed, replace with the module maker's curve.
+     */
+    public double[][] cycleLife() {
+        return switch (this) {
+            case FLOODED -> new double[][] {{0.2, 0.3, 0.5, 0.8, 1.0}, {3000, 2000, 1200, 600, 400}};
+            case AGM -> new double[][] {{0.2, 0.3, 0.5, 0.8, 1.0}, {2500, 1600, 800, 450, 300}};
+            case GEL -> new double[][] {{0.2, 0.3, 0.5, 0.8, 1.0}, {3000, 2000, 1000, 550, 400}};
+            case LIFEPO4 -> new double[][] {{0.2, 0.5, 0.8, 1.0}, {12000, 6000, 4000, 3000}};
+        };
+    }
+
+    /** Calendar life at moderate temperature, years (from memory; unconfirmed). */
+    public double calendarLifeYears() {
+        return switch (this) {
+            case FLOODED -> 10;
+            case AGM -> 7;
+            case GEL -> 10;
+            case LIFEPO4 -> 15;
+        };
+    }
+
     /** Where each default comes from, for the workbook. */
     public String sources() {
         return switch (this) {

@@ -56,6 +56,7 @@ final class ConsoleSummary {
             }
             if (r.year() != null) {
                 out.println("  year: " + r.year().comparison(r.bank()));
+                out.println("  " + r.year().life());
             }
             for (Check c : r.advisories()) {
                 if (!c.passes()) {

@@ -72,7 +72,7 @@ final class SummarySheet {
             s.formulaText(row++, 4, "IF(COUNTIF(" + SheetWriter.addr(firstCheck, 4) + ":" + SheetWriter.addr(lastCheck, 4)
                     + ",\"FAIL\")=0,\"pass\",\"FAIL\")", r.passes() ? "pass" : "FAIL");
             row = paragraph(ctx, s, row, r.year() == null ? "The year was not simulated: an off-grid system needs its PV array for that."
-                    : "Daily-energy chain against the simulated year: " + r.year().comparison(r.bank()) + ".");
+                    : "Daily-energy chain against the simulated year: " + r.year().comparison(r.bank()) + "; " + r.year().life() + ".");
             row++;
             s.text(row++, 0, "Code limits to look at (they do not reject the design; the authority having jurisdiction decides)", ctx.styles.subtitle);
             s.header(row++, 0, "Limit", "Design value", "Limit", "Unit", "Result", "Margin", "Basis");

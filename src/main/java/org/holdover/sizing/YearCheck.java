@@ -90,6 +90,14 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
         return metrics().reliability().unmetWh() <= unmetLimitWh + 1e-6;
     }
 
+    /** The battery's expected life in words (rainflow counting of the year, ASTM E1049-85; curves from memory). */
+    public String life() {
+        return metrics().battery().life().map(l -> String.format(Locale.ROOT,
+                "battery life about %.1f years, limited by %s (cycling alone %.1f years, rainflow counting of the simulated year"
+                        + " against the chemistry's cycle-life curve, from memory; calendar %.0f years, from memory)",
+                l.lifeYears(), l.limitedBy().name().toLowerCase(Locale.ROOT), l.cycleLifeYears(), l.calendarLifeYears())).orElse("");
+    }
+
     /** The chain-versus-simulation comparison in words. */
     public String comparison(BankDesign chain) {
         double usableChain = bank.nominalEnergyWh() * (bank.ceilingSoc() - bank.floorSoc());
@@ -148,7 +156,10 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
         start = Math.min(1.0, Math.max(floor, start));
         BatteryBank bank = new BatteryBank(nominal, floor, 1.0, start, c.roundTripEfficiency(), 1.0, maxCharge, maxDischarge);
         SystemDesign design = new SystemDesign(cc, inv, bank, charger, java.util.Optional.empty());
-        TracedYear traced = YearSimulation.runTraced(design, cond, AnalysisOptions.NONE);
+        double[][] curve = c.cycleLife();
+        AnalysisOptions life = new AnalysisOptions(java.util.List.of(), java.util.Optional.of(new org.holdover.sim.BatteryAging(
+                new org.holdover.sim.CycleLifeCurve(curve[0], curve[1]), c.calendarLifeYears())));
+        TracedYear traced = YearSimulation.runTraced(design, cond, life);
         double scale = scaleNeeded(design, cond, unmetLimit);
         return new YearCheck(bank, cc, inv, charger, la.loadW().clone(), pv, grid, forbidden, traced, unmetLimit, scale);
     }
