@@ -154,7 +154,7 @@ final class SummarySheet {
     private static int check(Context ctx, SheetWriter s, int row, Check c, int bankRow) {
         String[] f = formulas(ctx, c, bankRow);
         String R = String.valueOf(row + 1);
-        s.text(row, 0, c.label());
+        s.text(row, 0, c.label(), ctx.styles.wrap);
         s.formula(row, 1, f[0], c.value(), format(c));
         s.formula(row, 2, f[1], c.limit(), format(c));
         s.text(row, 3, c.unit());
@@ -166,8 +166,9 @@ final class SummarySheet {
             s.formula(row, 5, atLeast ? "B" + R + "/C" + R + "-1" : "1-B" + R + "/C" + R, c.margin(), Styles.PCT);
         }
         s.text(row, 6, c.basis(), ctx.styles.wrap);
-        if (c.basis().length() > 44) {
-            s.sheet.getRow(row).setHeightInPoints(15f * (int) Math.ceil(c.basis().length() / 44.0) + 2);
+        int lines = Math.max((int) Math.ceil(c.basis().length() / 44.0), (int) Math.ceil(c.label().length() / 52.0));
+        if (lines > 1) {
+            s.sheet.getRow(row).setHeightInPoints(15f * lines + 2);
         }
         return row + 1;
     }
