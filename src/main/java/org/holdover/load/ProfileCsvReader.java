@@ -535,7 +535,7 @@ public final class ProfileCsvReader {
             } else if ((c == '+' || c == '-') && len - i == 6 && s.charAt(i + 3) == ':') {
                 int oh = digits(s, i + 1, 2);
                 int om = digits(s, i + 4, 2);
-                if (oh < 0 || om < 0 || oh > 18) {
+                if (oh < 0 || om < 0 || om > 59 || oh * 60 + om > 18 * 60) {
                     return null;
                 }
                 offset = (c == '-' ? -1 : 1) * (oh * 3600 + om * 60);
