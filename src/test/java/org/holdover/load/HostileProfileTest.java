@@ -82,6 +82,38 @@ class HostileProfileTest {
     }
 
     @Test
+    void aBadByteIsReportedOnItsOwnLine(@TempDir Path dir) throws IOException {
+        // Found while writing the corpus: the strict decoder failed inside the 64 K read-ahead buffer, before
+        // the parser had counted any line, so a bad byte on line 102 was reported on line 1.
+        StringBuilder b = new StringBuilder("hour,W\n");
+        for (int h = 0; h < 100; h++) {
+            b.append(h).append(",5\n");
+        }
+        byte[] head = b.toString().getBytes(StandardCharsets.UTF_8);
+        byte[] bad = "# caf\u00e9 (Latin-1)\r\n100,5\n".getBytes(StandardCharsets.ISO_8859_1);
+        byte[] all = java.util.Arrays.copyOf(head, head.length + bad.length);
+        System.arraycopy(bad, 0, all, head.length, bad.length);
+        Path f = dir.resolve("p.csv");
+        Files.write(f, all);
+        assertThat(firstProblem(f, "p.csv")).isEqualTo("p.csv:102: is not valid UTF-8 text; save the file as UTF-8 (plain CSV)");
+    }
+
+    @Test
+    void aLineTooLongToBeAProfileIsRefusedAsItStreamsBy(@TempDir Path dir) throws IOException {
+        // A file with no line breaks would be collected whole as one line, up to the 200 MB limit, which can
+        // exhaust a small heap; lines are limited to ProfileCsvReader.MAX_LINE_CHARS as they are read.
+        Path f = dir.resolve("p.csv");
+        Files.writeString(f, "hour,W\r\n0,5\r\n1," + "7".repeat(ProfileCsvReader.MAX_LINE_CHARS) + "\r\n",
+                StandardCharsets.UTF_8);
+        assertThat(firstProblem(f, "p.csv")).isEqualTo("p.csv:3: the line is longer than 10000 characters; a CSV profile"
+                + " has one short line per reading; check it is the right file");
+        Files.writeString(f, "hour,W\n0,5\n# " + "x".repeat(ProfileCsvReader.MAX_LINE_CHARS - 2) + "\n1,6\n",
+                StandardCharsets.UTF_8);
+        assertThat(firstProblem(f, "p.csv")).as("a line of exactly the limit is read")
+                .startsWith("p.csv:4: no data for 8758 hour(s)");
+    }
+
+    @Test
     void controlCharactersInAValueAreShownAsQuestionMarks(@TempDir Path dir) throws IOException {
         Path f = dir.resolve("p.csv");
         Files.writeString(f, "hour,W\n0,\u001b[31m5\u0085x\n", StandardCharsets.UTF_8);
