@@ -2,11 +2,13 @@ package org.holdover.cli;
 
 import java.io.IOException;
 import java.io.InputStream;
+import java.io.OutputStream;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.concurrent.Callable;
+import java.util.function.UnaryOperator;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -32,6 +34,9 @@ final class InitCommand implements Callable<Integer> {
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;
 
+    /** Wraps the temporary file's stream: a seam for tests that make the write fail part way. */
+    UnaryOperator<OutputStream> wrap = UnaryOperator.identity();
+
     @Override
     public Integer call() throws Exception {
         String resource = mode == Kind.backup ? "starter-backup.yaml" : "starter-off-grid.yaml";
@@ -44,7 +49,9 @@ final class InitCommand implements Callable<Integer> {
             Files.createDirectories(dir);
             Path tmp = Files.createTempFile(dir, ".holdover-", ".yaml.part");
             try {
-                Files.write(tmp, text);
+                try (OutputStream out = wrap.apply(Files.newOutputStream(tmp))) {
+                    out.write(text);
+                }
                 if (force) {
                     Files.move(tmp, file, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
                 } else {

@@ -1,12 +1,13 @@
 package org.holdover.load;
 
 import java.io.BufferedReader;
+import java.io.FilterReader;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
+import java.io.Reader;
 import java.nio.charset.CharsetDecoder;
 import java.nio.charset.CodingErrorAction;
-import java.nio.charset.MalformedInputException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -47,6 +48,11 @@ import org.holdover.project.SourceLocation;
 public final class ProfileCsvReader {
 
     private static final int MAX_REPORTED = 20;
+    /**
+     * Longest line accepted, characters. A profile line is a few dozen; a longer one means a file that is
+     * not a profile, and reading it whole as one line could exhaust memory (up to the 200 MB file limit).
+     */
+    static final int MAX_LINE_CHARS = 10_000;
 
     private final String display;
     private final ZoneId zone;
@@ -71,21 +77,81 @@ public final class ProfileCsvReader {
     public static MeasuredProfile read(Path file, String display, Integer year, ZoneId zone, int maxGapHours)
             throws InputException {
         InputFiles.checkReadable(file, display, InputFiles.MAX_DATA_BYTES);
+        // Bad bytes become U+FFFD and are reported with their line by parse (a decoding exception would come
+        // from the read-ahead buffer, lines before the parser knows where it is).
         CharsetDecoder decoder = StandardCharsets.UTF_8.newDecoder()
-                .onMalformedInput(CodingErrorAction.REPORT).onUnmappableCharacter(CodingErrorAction.REPORT);
+                .onMalformedInput(CodingErrorAction.REPLACE).onUnmappableCharacter(CodingErrorAction.REPLACE);
         ProfileCsvReader r = new ProfileCsvReader(display, zone, maxGapHours);
         try (InputStream in = Files.newInputStream(file);
-             BufferedReader br = new BufferedReader(new InputStreamReader(in, decoder), 1 << 16)) {
+             BufferedReader br = new BufferedReader(new LineLimit(new InputStreamReader(in, decoder)), 1 << 16)) {
             return r.parse(br, year);
-        } catch (MalformedInputException e) {
-            throw InputException.at(SourceLocation.of(display, r.lineNo + 1), "", "is not valid UTF-8 text",
-                    "save the file as UTF-8 (plain CSV)");
+        } catch (LineLimit.TooLong e) {
+            throw InputException.at(SourceLocation.of(display, e.line), "", "the line is longer than "
+                    + MAX_LINE_CHARS + " characters", "a CSV profile has one short line per reading; check it is the right file");
         } catch (IOException e) {
             throw InputException.at(SourceLocation.of(display), "", "cannot read the file: " + e.getMessage(), "");
         }
     }
 
     private int lineNo;
+
+    /**
+     * Refuses a line longer than {@link #MAX_LINE_CHARS} as the text streams by, before it is collected whole
+     * (it counts lines itself: the buffer reads ahead of the parser).
+     */
+    private static final class LineLimit extends FilterReader {
+
+        /** The line that is too long (1-based). */
+        static final class TooLong extends IOException {
+            final int line;
+
+            TooLong(int line) {
+                super("line " + line + " is too long");
+                this.line = line;
+            }
+        }
+
+        private int line = 1;
+        private int run;
+        private boolean afterCr;
+
+        LineLimit(Reader in) {
+            super(in);
+        }
+
+        @Override
+        public int read() throws IOException {
+            int c = super.read();
+            if (c >= 0) {
+                see((char) c);
+            }
+            return c;
+        }
+
+        @Override
+        public int read(char[] buf, int off, int len) throws IOException {
+            int n = super.read(buf, off, len);
+            for (int i = off; i < off + n; i++) {
+                see(buf[i]);
+            }
+            return n;
+        }
+
+        private void see(char c) throws TooLong {
+            if (c == '\n' || c == '\r') {
+                if (c == '\r' || !afterCr) {
+                    line++;
+                }
+                afterCr = c == '\r';
+                run = 0;
+                return;
+            }
+            afterCr = false;
+            if (++run > MAX_LINE_CHARS) {
+                throw new TooLong(line);
+            }
+        }
+    }
 
     private enum Kind { HOUR, TIMESTAMP }
 
@@ -107,6 +173,10 @@ public final class ProfileCsvReader {
             lineNo++;
             if (lineNo == 1 && !line.isEmpty() && line.charAt(0) == '\uFEFF') {
                 line = line.substring(1);
+            }
+            if (line.indexOf('\uFFFD') >= 0) {
+                throw InputException.at(SourceLocation.of(display, lineNo), "", "is not valid UTF-8 text",
+                        "save the file as UTF-8 (plain CSV)");
             }
             String t = line.strip();
             if (t.isEmpty() || t.charAt(0) == '#') {
@@ -535,7 +605,7 @@ public final class ProfileCsvReader {
             } else if ((c == '+' || c == '-') && len - i == 6 && s.charAt(i + 3) == ':') {
                 int oh = digits(s, i + 1, 2);
                 int om = digits(s, i + 4, 2);
-                if (oh < 0 || om < 0 || oh > 18) {
+                if (oh < 0 || om < 0 || om > 59 || oh * 60 + om > 18 * 60) {
                     return null;
                 }
                 offset = (c == '-' ? -1 : 1) * (oh * 3600 + om * 60);

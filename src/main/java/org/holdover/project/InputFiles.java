@@ -48,13 +48,20 @@ public final class InputFiles {
         return decodeUtf8(bytes, display);
     }
 
-    /** Checks that a file exists, is a regular readable file and is within the size limit. */
+    /**
+     * Checks that a file exists, is a regular readable file and is within the size limit. A device, pipe or
+     * socket is refused: its size is not known before it is read (a device such as /dev/zero never ends).
+     */
     public static void checkReadable(Path file, String display, long maxBytes) throws InputException {
         try {
             if (Files.isDirectory(file)) {
                 throw InputException.at(SourceLocation.of(display), "", "is a folder, not a file", "give the path of a file");
             }
             long size = Files.size(file);
+            if (!Files.isRegularFile(file)) {
+                throw InputException.at(SourceLocation.of(display), "", "is not a regular file (a device, pipe or socket)",
+                        "give the path of a file");
+            }
             if (size > maxBytes) {
                 throw tooLarge(display, maxBytes);
             }

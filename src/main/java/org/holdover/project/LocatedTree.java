@@ -7,11 +7,13 @@ import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.core.StreamReadConstraints;
 import com.fasterxml.jackson.core.StreamReadFeature;
+import com.fasterxml.jackson.core.exc.StreamConstraintsException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import com.fasterxml.jackson.dataformat.yaml.YAMLFactory;
+import com.fasterxml.jackson.dataformat.yaml.YAMLParser;
 import java.io.IOException;
 import java.util.HashMap;
 import java.util.Map;
@@ -25,6 +27,7 @@ final class LocatedTree {
 
     private static final int MAX_NESTING = 64;
     private static final int MAX_ALIASES = 20;
+    private static final String ALIAS = "a YAML alias (*";
 
     final JsonNode root;
     private final Map<String, SourceLocation> locations;
@@ -83,7 +86,13 @@ final class LocatedTree {
                 throw InputException.at(SourceLocation.of(file), "", "the file is empty",
                         "expected a project with at least name, mode, site and loads");
             }
-            JsonNode root = readValue(parser, "", locations, file);
+            JsonNode root;
+            try {
+                root = readValue(parser, "", locations, file);
+            } catch (StreamConstraintsException e) {
+                throw InputException.at(loc(parser.currentLocation(), file), "", "nested deeper than " + MAX_NESTING
+                        + " levels", "check the brackets and indentation");
+            }
             JsonToken extra = parser.nextToken();
             if (extra != null) {
                 throw InputException.at(loc(parser.currentTokenLocation(), file), "",
@@ -92,6 +101,9 @@ final class LocatedTree {
             return new LocatedTree(root, locations, file);
         } catch (JsonParseException e) {
             String original = String.valueOf(e.getOriginalMessage());
+            if (original.startsWith(ALIAS)) {
+                throw InputException.at(loc(e.getLocation(), file), "", original, "write the value out in full");
+            }
             if (original.startsWith("Malformed numeric value")) {
                 throw InputException.at(loc(e.getLocation(), file), "", firstLine(original).replace("Malformed numeric value",
                         "not a plain finite number:"), "write a plain number such as 120 or 0.75");
@@ -109,6 +121,10 @@ final class LocatedTree {
             throws IOException {
         JsonToken t = p.currentToken();
         locations.put(path, loc(p.currentTokenLocation(), file));
+        if (p instanceof YAMLParser y && y.isCurrentAlias()) {
+            // The YAML reader gives an alias as its anchor's name; say so rather than report a wrong type.
+            throw new JsonParseException(p, ALIAS + p.getText() + ") is not supported");
+        }
         JsonNodeFactory nf = JsonNodeFactory.instance;
         switch (t) {
             case START_OBJECT: {

@@ -1,6 +1,6 @@
 package org.holdover.project;
 
-import java.nio.file.Path;
+import java.nio.file.InvalidPathException;
 import java.time.DateTimeException;
 import java.time.ZoneId;
 import java.util.ArrayList;
@@ -103,11 +103,9 @@ public final class ProjectValidator {
             range("battery.endOfLifeCapacityPct", p.battery().endOfLifeCapacityPct(), 50, 100, "%");
         }
         if (p.catalog() != null && !p.catalog().equals("builtin")) {
-            Path c = project.resolve(p.catalog());
-            try {
-                InputFiles.checkReadable(c, project.displayOf(p.catalog()), InputFiles.MAX_PROJECT_BYTES);
-            } catch (InputException e) {
-                error("catalog", "cannot use \"" + p.catalog() + "\": " + e.problems().get(0).message(),
+            String why = unusable(p.catalog(), InputFiles.MAX_PROJECT_BYTES);
+            if (why != null) {
+                error("catalog", "cannot use \"" + p.catalog() + "\": " + why,
                         "write builtin, or the path of a catalog file relative to the project file");
             }
         }
@@ -182,10 +180,9 @@ public final class ProjectValidator {
             twelve("solar.monthlyAirTempC", s.monthlyAirTempC(), -60, 50, "°C");
         }
         if (s.weatherFile() != null) {
-            try {
-                InputFiles.checkReadable(project.resolve(s.weatherFile()), project.displayOf(s.weatherFile()), InputFiles.MAX_DATA_BYTES);
-            } catch (InputException e) {
-                error("solar.weatherFile", "cannot use \"" + s.weatherFile() + "\": " + e.problems().get(0).message(),
+            String why = unusable(s.weatherFile(), InputFiles.MAX_DATA_BYTES);
+            if (why != null) {
+                error("solar.weatherFile", "cannot use \"" + s.weatherFile() + "\": " + why,
                         "give the path of an EPW or CSV weather file relative to the project file");
             }
         }
@@ -278,10 +275,9 @@ public final class ProjectValidator {
             ProjectInput.ProfileInput pr = l.profile();
             String file = required("loads.profile.file", pr.file());
             if (file != null) {
-                try {
-                    InputFiles.checkReadable(project.resolve(file), project.displayOf(file), InputFiles.MAX_DATA_BYTES);
-                } catch (InputException e) {
-                    error("loads.profile.file", "cannot use \"" + file + "\": " + e.problems().get(0).message(),
+                String why = unusable(file, InputFiles.MAX_DATA_BYTES);
+                if (why != null) {
+                    error("loads.profile.file", "cannot use \"" + file + "\": " + why,
                             "give the path of a CSV file relative to the project file");
                 }
             }
@@ -425,6 +421,21 @@ public final class ProjectValidator {
             error(path + ".starterFactor", "is set but the starter is direct-on-line", "set starter: soft or vfd, or remove starterFactor");
         }
         rangeOpenLow(path + ".lockedRotorPowerFactor", m.lockedRotorPowerFactor(), 0, 1, "");
+    }
+
+    /**
+     * Why the file a field names cannot be used (missing, a folder or device, too large, unreadable, or not
+     * a path at all, e.g. with a NUL character), or null when it can.
+     */
+    private String unusable(String written, long maxBytes) {
+        try {
+            InputFiles.checkReadable(project.resolve(written), project.displayOf(written), maxBytes);
+            return null;
+        } catch (InputException e) {
+            return e.problems().get(0).message();
+        } catch (InvalidPathException e) {
+            return "not a usable path (" + e.getReason() + ")";
+        }
     }
 
     private <T> T required(String path, T value) {

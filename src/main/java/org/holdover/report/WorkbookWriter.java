@@ -7,6 +7,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.util.List;
+import java.util.function.UnaryOperator;
 import org.apache.poi.ss.usermodel.PrintSetup;
 import org.apache.poi.ss.usermodel.Sheet;
 import org.apache.poi.xssf.streaming.SXSSFWorkbook;
@@ -35,6 +36,15 @@ public final class WorkbookWriter {
      * @param overwrite replace an existing file
      */
     public static void write(SizingResult result, Path target, boolean overwrite) throws IOException {
+        write(result, target, overwrite, UnaryOperator.identity());
+    }
+
+    /**
+     * {@link #write(SizingResult, Path, boolean)} with the temporary file's stream passed through
+     * {@code wrap}: a seam for tests that make the write fail part way.
+     */
+    static void write(SizingResult result, Path target, boolean overwrite, UnaryOperator<OutputStream> wrap)
+            throws IOException {
         Path dir = target.toAbsolutePath().getParent();
         Files.createDirectories(dir);
         if (!overwrite && Files.exists(target)) {
@@ -42,7 +52,7 @@ public final class WorkbookWriter {
         }
         Path tmp = Files.createTempFile(dir, ".holdover-", ".xlsx.part");
         try {
-            try (OutputStream out = Files.newOutputStream(tmp)) {
+            try (OutputStream out = wrap.apply(Files.newOutputStream(tmp))) {
                 write(result, out);
             }
             if (overwrite) {

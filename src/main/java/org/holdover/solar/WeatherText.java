@@ -12,8 +12,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.regex.Pattern;
 import org.holdover.project.InputException;
+import org.holdover.project.InputFiles;
 import org.holdover.project.Problem;
 import org.holdover.project.SourceLocation;
 
@@ -28,8 +30,12 @@ final class WeatherText {
     private WeatherText() {
     }
 
-    /** The text of a file as lines (line 1 first), decoded strictly as UTF-8. */
+    /**
+     * The text of a file as lines (line 1 first), decoded strictly as UTF-8. A file larger than
+     * {@link InputFiles#MAX_DATA_BYTES}, or one that is not a regular file, is refused before it is read.
+     */
     static List<String> readLines(Path path, String displayName) throws InputException {
+        InputFiles.checkReadable(path, displayName, InputFiles.MAX_DATA_BYTES);
         byte[] bytes;
         try {
             bytes = Files.readAllBytes(path);
@@ -52,7 +58,8 @@ final class WeatherText {
                 }
             }
             throw InputException.at(SourceLocation.of(displayName, line), "",
-                    String.format("the file is not valid UTF-8: byte 0x%02X at byte offset %d", bytes[bad] & 0xFF, bad),
+                    String.format(Locale.ROOT, "the file is not valid UTF-8: byte 0x%02X at byte offset %d", bytes[bad] & 0xFF,
+                            bad),
                     "save the file as UTF-8 text");
         }
         dec.flush(out);

@@ -15,6 +15,10 @@
  *   <li>{@link org.holdover.testing.ExternalTools} finds the external programs; when one is missing a test
  *       is skipped with the install command, or fails when the environment variable {@code CI} is
  *       {@code true}.</li>
+ *   <li>{@link org.holdover.testing.Fuzz} and {@link org.holdover.testing.Mutator} fuzz the readers of user
+ *       files with mutations of real inputs and a fixed seed; {@link org.holdover.testing.FailingOutputStream}
+ *       makes a write fail part way; {@link org.holdover.testing.Leaves} lists every value of a result so
+ *       that two runs can be compared value by value.</li>
  * </ul>
  *
  * <p>Everything these classes write goes under {@code target/holdover-testing/} (see
