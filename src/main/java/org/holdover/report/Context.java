@@ -19,18 +19,22 @@ final class Context {
     static final String CURVES = "Inverter curves";
     static final String BUS = "DC bus";
     static final String BATTERY = "Battery";
+    static final String PV = "PV";
     static final String HOURLY = "Hourly";
+    static final String PV_HOURLY = "PV hourly";
     static final String INPUTS = "Inputs";
     static final String TABLES = "Tables";
     static final String CAUTIONS = "Cautions";
 
-    static final List<String> ORDER = List.of(SUMMARY, LOADS, MOTORS, DAYS, INVERTERS, CURVES, BUS, BATTERY, HOURLY,
-            INPUTS, TABLES, CAUTIONS);
+    static final List<String> ORDER = List.of(SUMMARY, LOADS, MOTORS, DAYS, INVERTERS, CURVES, BUS, BATTERY, PV, HOURLY,
+            PV_HOURLY, INPUTS, TABLES, CAUTIONS);
 
     final SXSSFWorkbook wb;
     final Styles styles;
     final SizingResult r;
     private final Map<String, SheetWriter> sheets = new HashMap<>();
+    /** Check id → the formulas of its value and limit, for checks computed on sheets other than Summary. */
+    final Map<String, String[]> checkCells = new HashMap<>();
 
     Context(SXSSFWorkbook wb, SizingResult r) {
         this.wb = wb;
@@ -38,7 +42,7 @@ final class Context {
         this.styles = new Styles(wb);
         for (String name : ORDER) {
             SXSSFSheet s = wb.createSheet(name);
-            if (!name.equals(HOURLY)) {
+            if (!name.equals(HOURLY) && !name.equals(PV_HOURLY)) {
                 s.setRandomAccessWindowSize(-1);
             }
             sheets.put(name, new SheetWriter(wb, s, styles));

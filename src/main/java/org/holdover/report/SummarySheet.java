@@ -71,7 +71,7 @@ final class SummarySheet {
             s.formulaText(row++, 4, "IF(COUNTIF(" + SheetWriter.addr(firstCheck, 4) + ":" + SheetWriter.addr(row - 2, 4)
                     + ",\"FAIL\")=0,\"pass\",\"FAIL\")", r.passes() ? "pass" : "FAIL");
             row++;
-            s.text(row++, 0, "Code limits to look at (they do not reject the design; the authority having jurisdiction decides)", ctx.styles.subtitle);
+            s.text(row++, 0, "Limits to look at (they do not reject the design; for code limits the authority having jurisdiction decides)", ctx.styles.subtitle);
             s.header(row++, 0, "Limit", "Design value", "Limit", "Unit", "Result", "Margin", "Basis");
             for (Check c : r.advisories()) {
                 row = check(ctx, s, row, c, bankRow);
@@ -141,7 +141,7 @@ final class SummarySheet {
         int invRow = InvertersSheet.FIRST + r.inverters().indexOf(r.inverter());
         s.formula(row++, 1, ctx.sheet(Context.INVERTERS).ref(invRow, InvertersSheet.PRICE) + "+" + bat.ref(bankRow, BatterySheet.COST),
                 r.inverter().spec().price() + b.price(), Styles.INT);
-        return row;
+        return PvSheet.summary(ctx, s, row);
     }
 
     private static int ref(SheetWriter s, int row, String label, String name, double value, String unit, String format) {
@@ -196,7 +196,13 @@ final class SummarySheet {
             case "code.unitKwh" -> new String[] {B.apply(BatterySheet.MOD_V) + "*" + B.apply(BatterySheet.AH) + "/1000", "CodeUnitKwh"};
             case "code.utilityKwh" -> new String[] {B.apply(BatterySheet.KWH), "CodeUtilityKwh"};
             case "code.garageKwh" -> new String[] {B.apply(BatterySheet.KWH), "CodeGarageKwh"};
-            default -> throw new IllegalStateException("no workbook cells for check " + c.id() + " (" + c.label().toLowerCase(Locale.ROOT) + ")");
+            default -> {
+                String[] cells = ctx.checkCells.get(c.id());
+                if (cells == null) {
+                    throw new IllegalStateException("no workbook cells for check " + c.id() + " (" + c.label().toLowerCase(Locale.ROOT) + ")");
+                }
+                yield cells;
+            }
         };
     }
 }

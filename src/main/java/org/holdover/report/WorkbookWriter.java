@@ -76,6 +76,8 @@ public final class WorkbookWriter {
             InvertersSheet.write(ctx, blocks);
             BusSheet.write(ctx);
             int bankRow = BatterySheet.write(ctx);
+            PvHourlySheet.write(ctx);
+            PvSheet.write(ctx, bankRow);
             SummarySheet.write(ctx, bankRow);
             CautionsSheet.write(ctx);
             printSetup(ctx);

@@ -65,10 +65,15 @@ public final class Sizing {
         List<Check> checks = new ArrayList<>(inv.checks());
         checks.add(chosen.currentCheck());
         checks.addAll(bankChecks(bank, inv.spec(), chosenEnergy));
-        List<Check> advisories = fireCode(bank, in.location());
+        List<Check> advisories = new ArrayList<>(fireCode(bank, in.location()));
+        SolarDesign solar = in.solar() == null ? null : PvSizing.size(in, chosen, chosenEnergy);
+        if (solar != null) {
+            checks.addAll(solar.checks());
+            advisories.addAll(solar.advisories());
+        }
         LossModel loss = inv.spec().loss();
         return new SizingResult(in, assessments, buses, chosen, chosenEnergy, bank.requirement(), checks, advisories,
-                WeightedEfficiency.CEC.of(loss), WeightedEfficiency.EURO.of(loss));
+                WeightedEfficiency.CEC.of(loss), WeightedEfficiency.EURO.of(loss), solar);
     }
 
     static InverterAssessment assess(InverterSpec s, SizingInput in) {

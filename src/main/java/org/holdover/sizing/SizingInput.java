@@ -35,6 +35,7 @@ import org.holdover.project.ProjectInput;
  * @param measuredW         the measured profile as read, W per hour, or null
  * @param profileScale      scale applied to it
  * @param profileServed     whether the profile's loads are served (backup: critical)
+ * @param solar             the solar resource and array settings, or null when the project has no solar section
  */
 public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms, double frequencyHz, boolean splitPhase,
                           double inverterAmbientC, double batteryColdestC, double inverterMargin,
@@ -42,7 +43,7 @@ public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms
                           Double endOfLife, ProjectInput.BatteryLocation location, double outageHours,
                           double autonomyDays, LoadAnalysis loads, Catalog catalog, List<Assumption> assumptions,
                           List<Problem> warnings, List<String> notes, double[] measuredW,
-                          double profileScale, boolean profileServed) {
+                          double profileScale, boolean profileServed, SolarSetup solar) {
     public SizingInput {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(mode, "mode");
@@ -57,5 +58,18 @@ public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms
         if (mode == ProjectInput.Mode.OFF_GRID && !(autonomyDays > 0)) {
             throw new IllegalArgumentException("off-grid mode needs autonomy days > 0");
         }
+    }
+
+    /** Without a solar section. */
+    public SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms, double frequencyHz, boolean splitPhase,
+                       double inverterAmbientC, double batteryColdestC, double inverterMargin,
+                       double maxBatteryCurrentA, int maxParallelRule, Chemistry chemistry, Double depthOfDischarge,
+                       Double endOfLife, ProjectInput.BatteryLocation location, double outageHours,
+                       double autonomyDays, LoadAnalysis loads, Catalog catalog, List<Assumption> assumptions,
+                       List<Problem> warnings, List<String> notes, double[] measuredW,
+                       double profileScale, boolean profileServed) {
+        this(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin,
+                maxBatteryCurrentA, maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours,
+                autonomyDays, loads, catalog, assumptions, warnings, notes, measuredW, profileScale, profileServed, null);
     }
 }

@@ -17,10 +17,18 @@ import org.holdover.battery.BankRequirement;
  * @param advisories   code limits that do not reject the design but must be looked at (fire-code energy limits)
  * @param cecEfficiency     CEC weighted efficiency of the chosen inverter's loss model
  * @param euroEfficiency    European weighted efficiency of the chosen inverter's loss model
+ * @param solar             the PV array and charge controller(s), or null (no solar section, or no system chosen)
  */
 public record SizingResult(SizingInput input, List<InverterAssessment> inverters, List<BusOption> buses,
                            BusOption chosen, EnergyBasis energy, BankRequirement requirement, List<Check> checks,
-                           List<Check> advisories, double cecEfficiency, double euroEfficiency) {
+                           List<Check> advisories, double cecEfficiency, double euroEfficiency, SolarDesign solar) {
+
+    /** Without a PV design. */
+    public SizingResult(SizingInput input, List<InverterAssessment> inverters, List<BusOption> buses,
+                        BusOption chosen, EnergyBasis energy, BankRequirement requirement, List<Check> checks,
+                        List<Check> advisories, double cecEfficiency, double euroEfficiency) {
+        this(input, inverters, buses, chosen, energy, requirement, checks, advisories, cecEfficiency, euroEfficiency, null);
+    }
 
     public SizingResult {
         inverters = List.copyOf(inverters);
