@@ -13,11 +13,22 @@ import org.holdover.inverter.InverterSpec;
  * @param note           note shown in the workbook
  * @param inverters      inverters
  * @param batteryModules battery modules
+ * @param pvModules      PV modules (may be empty)
+ * @param chargeControllers solar charge controllers (may be empty)
  */
 public record Catalog(String name, String source, boolean demoData, String note, List<InverterSpec> inverters,
-                      List<BatteryModule> batteryModules) {
+                      List<BatteryModule> batteryModules, List<PvModuleItem> pvModules,
+                      List<ControllerItem> chargeControllers) {
     public Catalog {
         inverters = List.copyOf(inverters);
         batteryModules = List.copyOf(batteryModules);
+        pvModules = List.copyOf(pvModules);
+        chargeControllers = List.copyOf(chargeControllers);
+    }
+
+    /** A catalog without PV modules and charge controllers. */
+    public Catalog(String name, String source, boolean demoData, String note, List<InverterSpec> inverters,
+                   List<BatteryModule> batteryModules) {
+        this(name, source, demoData, note, inverters, batteryModules, List.of(), List.of());
     }
 }

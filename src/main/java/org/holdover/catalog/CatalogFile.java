@@ -11,9 +11,12 @@ import java.util.List;
  * @param note           a note shown in the workbook
  * @param inverters      inverters
  * @param batteryModules battery modules
+ * @param pvModules      PV modules (optional; needed when a project has a solar section)
+ * @param chargeControllers solar charge controllers (optional; needed when a project has a solar section)
  */
 public record CatalogFile(String name, Boolean demoData, String note, List<InverterEntry> inverters,
-                          List<ModuleEntry> batteryModules) {
+                          List<ModuleEntry> batteryModules, List<PvModuleEntry> pvModules,
+                          List<ControllerEntry> chargeControllers) {
 
     /**
      * @param id                 identifier, unique in the catalog
@@ -82,5 +85,50 @@ public record CatalogFile(String name, Boolean demoData, String note, List<Inver
                               Double rateHours, Double internalResistanceMilliohm, Double maxContinuousA,
                               Double maxSurgeA, Double surgeSeconds, Double maxChargeA, Integer maxParallel,
                               Integer maxSeries, Double price) {
+    }
+
+    /**
+     * A PV module as its datasheet gives it, at standard test conditions (1000 W/m², cells at 25 °C).
+     * Temperature coefficients are in % of the STC value per °C, as datasheets print them.
+     *
+     * @param id          identifier, unique in the catalog
+     * @param description plain description
+     * @param powerW      maximum power P_mp, W
+     * @param vmpV        voltage at maximum power, V
+     * @param impA        current at maximum power, A
+     * @param vocV        open-circuit voltage, V
+     * @param iscA        short-circuit current, A
+     * @param pmaxPctPerC temperature coefficient of P_mp, %/°C (negative)
+     * @param vocPctPerC  temperature coefficient of V_oc, %/°C (negative); without it the cold-voltage check uses
+     *                    NEC Table 690.7(A)
+     * @param iscPctPerC  temperature coefficient of I_sc, %/°C (positive, optional)
+     * @param vmpPctPerC  temperature coefficient of V_mp, %/°C (negative, optional)
+     * @param noctC       nominal operating cell temperature, °C
+     * @param areaM2      module area, m²
+     * @param price       demo price
+     */
+    public record PvModuleEntry(String id, String description, Double powerW, Double vmpV, Double impA, Double vocV,
+                                Double iscA, Double pmaxPctPerC, Double vocPctPerC, Double iscPctPerC, Double vmpPctPerC,
+                                Double noctC, Double areaM2, Double price) {
+    }
+
+    /**
+     * A solar charge controller.
+     *
+     * @param id                  identifier, unique in the catalog
+     * @param description         plain description
+     * @param type                mppt or pwm
+     * @param batteryV            nominal battery (bus) voltage classes it charges, V, e.g. [12, 24, 48]
+     * @param maxPvInputV         highest PV open-circuit voltage the input withstands, V
+     * @param maxInputCurrentA    highest PV input current allowed (compared with 1.25 × I_sc), A
+     * @param ratedOutputCurrentA rated battery-side current, A
+     * @param efficiencyPct       conversion efficiency, %
+     * @param minHeadroomV        how far the array's maximum-power voltage must stay above the battery voltage, V
+     *                            (default 0 for PWM, 5 for MPPT)
+     * @param price               demo price
+     */
+    public record ControllerEntry(String id, String description, String type, List<Double> batteryV,
+                                  Double maxPvInputV, Double maxInputCurrentA, Double ratedOutputCurrentA,
+                                  Double efficiencyPct, Double minHeadroomV, Double price) {
     }
 }

@@ -9,13 +9,16 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
+import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.function.Function;
 import org.holdover.battery.BatteryModule;
 import org.holdover.battery.Chemistry;
 import org.holdover.catalog.CatalogFile.EfficiencyEntry;
 import org.holdover.catalog.CatalogFile.InverterEntry;
+import org.holdover.catalog.CatalogFile.ControllerEntry;
 import org.holdover.catalog.CatalogFile.ModuleEntry;
+import org.holdover.catalog.CatalogFile.PvModuleEntry;
 import org.holdover.catalog.CatalogFile.SurgeEntry;
 import org.holdover.inverter.AcOutput;
 import org.holdover.inverter.EfficiencyPoint;
@@ -23,6 +26,11 @@ import org.holdover.inverter.InverterSpec;
 import org.holdover.inverter.LossModel;
 import org.holdover.inverter.SurgeRating;
 import org.holdover.project.InputException;
+import org.holdover.pv.ChargeController;
+import org.holdover.pv.ControllerType;
+import org.holdover.pv.PvModule;
+import org.holdover.pv.StcRatings;
+import org.holdover.pv.TemperatureCoefficients;
 import org.holdover.project.Problem;
 import org.holdover.project.SourceLocation;
 import org.holdover.project.StructuredFile;
@@ -90,6 +98,24 @@ public final class CatalogReader {
                 }
             }
         }
+        List<PvModuleItem> pvModules = new ArrayList<>();
+        if (f.pvModules() != null) {
+            for (int i = 0; i < f.pvModules().size(); i++) {
+                PvModuleItem m = pvModule(f.pvModules().get(i), "pvModules[" + i + "]", ids);
+                if (m != null) {
+                    pvModules.add(m);
+                }
+            }
+        }
+        List<ControllerItem> controllers = new ArrayList<>();
+        if (f.chargeControllers() != null) {
+            for (int i = 0; i < f.chargeControllers().size(); i++) {
+                ControllerItem c = controller(f.chargeControllers().get(i), "chargeControllers[" + i + "]", ids);
+                if (c != null) {
+                    controllers.add(c);
+                }
+            }
+        }
         if (problems.isEmpty() && inverters.isEmpty()) {
             problem("inverters", "the catalog has no inverters", "list at least one");
         }
@@ -100,7 +126,150 @@ public final class CatalogReader {
             throw new InputException(problems);
         }
         return new Catalog(f.name(), display, Boolean.TRUE.equals(f.demoData()), f.note() == null ? "" : f.note(),
-                inverters, modules);
+                inverters, modules, pvModules, controllers);
+    }
+
+    /** Largest module power accepted, W (a plausibility bound for one module). */
+    static final double MAX_MODULE_W = 1000;
+
+    private PvModuleItem pvModule(PvModuleEntry e, String p, Set<String> ids) {
+        if (e == null) {
+            problem(p, "is empty", "");
+            return null;
+        }
+        int before = problems.size();
+        String id = id(e.id(), p, ids);
+        Double w = positive(p + ".powerW", e.powerW(), MAX_MODULE_W);
+        Double vmp = positive(p + ".vmpV", e.vmpV(), 500);
+        Double imp = positive(p + ".impA", e.impA(), 50);
+        Double voc = positive(p + ".vocV", e.vocV(), 500);
+        Double isc = positive(p + ".iscA", e.iscA(), 50);
+        if (vmp != null && voc != null && vmp >= voc) {
+            problem(p + ".vmpV", vmp + " V is not below the open-circuit " + voc + " V", "V_mp < V_oc");
+        }
+        if (imp != null && isc != null && imp >= isc) {
+            problem(p + ".impA", imp + " A is not below the short-circuit " + isc + " A", "I_mp < I_sc");
+        }
+        if (w != null && vmp != null && imp != null && Math.abs(vmp * imp - w) > STC_POWER_CONSISTENCY * w) {
+            problem(p + ".powerW", w + " W disagrees with vmpV × impA = " + String.format(Locale.ROOT, "%.1f", vmp * imp) + " W",
+                    "P_mp within 5 % of V_mp × I_mp (check the datasheet figures)");
+        }
+        Double pmax = coefficient(p + ".pmaxPctPerC", e.pmaxPctPerC(), true, -1.0, 0.0, true);
+        Double vocC = coefficient(p + ".vocPctPerC", e.vocPctPerC(), false, -1.0, 0.0, true);
+        Double iscC = coefficient(p + ".iscPctPerC", e.iscPctPerC(), false, 0.0, 0.2, false);
+        Double vmpC = coefficient(p + ".vmpPctPerC", e.vmpPctPerC(), false, -1.0, 0.0, true);
+        Double noct = null;
+        if (e.noctC() == null) {
+            problem(p + ".noctC", "is missing", "the nominal operating cell temperature from the datasheet, °C (30–70)");
+        } else if (!(e.noctC() >= 30 && e.noctC() <= 70)) {
+            problem(p + ".noctC", "must be 30–70 °C, got " + e.noctC(), "");
+        } else {
+            noct = e.noctC();
+        }
+        Double area = positive(p + ".areaM2", e.areaM2(), 9.99);
+        if (w != null && area != null && w / area > 400) {
+            problem(p + ".areaM2", w + " W on " + area + " m² is above 40 % efficiency", "the module's area in m²");
+        }
+        Double price = nonNegative(p + ".price", e.price(), 1e8);
+        if (problems.size() > before || id == null || w == null || vmp == null || imp == null || voc == null
+                || isc == null || pmax == null || noct == null || area == null || price == null) {
+            return null;
+        }
+        TemperatureCoefficients tc = new TemperatureCoefficients(pmax / 100.0, optional(vocC), optional(iscC),
+                optional(vmpC));
+        PvModule m = new PvModule(id, new StcRatings(w, vmp, imp, voc, isc), tc, noct, area);
+        return new PvModuleItem(id, e.description() == null ? id : e.description(), m, price);
+    }
+
+    /** V_mp × I_mp must be within this fraction of P_mp (the engine's own consistency bound). */
+    static final double STC_POWER_CONSISTENCY = 0.05;
+    /** Headroom above the battery an MPPT controller needs when the catalog does not say, V (common practice, no source). */
+    public static final double DEFAULT_MPPT_HEADROOM_V = 5.0;
+
+    private ControllerItem controller(ControllerEntry e, String p, Set<String> ids) {
+        if (e == null) {
+            problem(p, "is empty", "");
+            return null;
+        }
+        int before = problems.size();
+        String id = id(e.id(), p, ids);
+        ControllerType type = null;
+        if (e.type() == null) {
+            problem(p + ".type", "is missing", "mppt or pwm");
+        } else if (e.type().strip().equalsIgnoreCase("mppt")) {
+            type = ControllerType.MPPT;
+        } else if (e.type().strip().equalsIgnoreCase("pwm")) {
+            type = ControllerType.PWM;
+        } else {
+            problem(p + ".type", "unknown controller type \"" + e.type() + "\"", "mppt or pwm");
+        }
+        List<Double> classes = new ArrayList<>();
+        if (e.batteryV() == null || e.batteryV().isEmpty()) {
+            problem(p + ".batteryV", "is missing", "the nominal battery voltages it charges, e.g. [12, 24, 48]");
+        } else {
+            for (int i = 0; i < e.batteryV().size(); i++) {
+                Double v = positive(p + ".batteryV[" + i + "]", e.batteryV().get(i), 1000);
+                if (v != null && !classes.contains(v)) {
+                    classes.add(v);
+                }
+            }
+        }
+        Double maxV = positive(p + ".maxPvInputV", e.maxPvInputV(), 2000);
+        Double inA = positive(p + ".maxInputCurrentA", e.maxInputCurrentA(), 1000);
+        Double outA = positive(p + ".ratedOutputCurrentA", e.ratedOutputCurrentA(), 1000);
+        Double eff = positive(p + ".efficiencyPct", e.efficiencyPct(), 100);
+        if (eff != null && eff < 50) {
+            problem(p + ".efficiencyPct", "must be 50–100 %, got " + eff, "");
+        }
+        double headroom = type == ControllerType.PWM ? 0.0 : DEFAULT_MPPT_HEADROOM_V;
+        if (e.minHeadroomV() != null) {
+            if (!(e.minHeadroomV() >= 0) || maxV != null && e.minHeadroomV() >= maxV) {
+                problem(p + ".minHeadroomV", "must be 0 or more and below maxPvInputV, got " + e.minHeadroomV(), "");
+            } else {
+                headroom = e.minHeadroomV();
+            }
+        }
+        if (maxV != null) {
+            for (double v : classes) {
+                if (v >= maxV) {
+                    problem(p + ".batteryV", fmt(v) + " V is not below the maximum PV input " + fmt(maxV) + " V",
+                            "battery classes below the PV input limit");
+                    break;
+                }
+            }
+        }
+        Double price = nonNegative(p + ".price", e.price(), 1e8);
+        if (problems.size() > before || id == null || type == null || classes.isEmpty() || maxV == null || inA == null
+                || outA == null || eff == null || price == null) {
+            return null;
+        }
+        ChargeController c = new ChargeController(id, type, maxV, inA, outA, eff / 100.0, headroom);
+        return new ControllerItem(id, e.description() == null ? id : e.description(), c, classes, price);
+    }
+
+    /** A temperature coefficient in %/°C within (lo, hi) (lo inclusive when not open); null when absent or bad. */
+    private Double coefficient(String path, Double v, boolean required, double lo, double hi, boolean negative) {
+        if (v == null) {
+            if (required) {
+                problem(path, "is missing", "the datasheet's temperature coefficient in %/°C, e.g. -0.35");
+            }
+            return null;
+        }
+        boolean ok = negative ? v > lo && v < hi : v >= lo && v <= hi;
+        if (!ok) {
+            problem(path, (negative ? "must be between " + fmt(lo) + " and 0 %/°C (negative)" : "must be "
+                    + fmt(lo) + "–" + fmt(hi) + " %/°C") + ", got " + v, "as printed on the datasheet, in %/°C");
+            return null;
+        }
+        return v;
+    }
+
+    private static OptionalDouble optional(Double pctPerC) {
+        return pctPerC == null ? OptionalDouble.empty() : OptionalDouble.of(pctPerC / 100.0);
+    }
+
+    private static String fmt(double v) {
+        return v == Math.rint(v) && Math.abs(v) < 1e15 ? String.valueOf((long) v) : String.valueOf(v);
     }
 
     private InverterSpec inverter(InverterEntry e, String p, Set<String> ids) {

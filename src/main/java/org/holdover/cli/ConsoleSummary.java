@@ -8,6 +8,8 @@ import org.holdover.project.Problem;
 import org.holdover.report.Cautions;
 import org.holdover.sizing.BusOption;
 import org.holdover.sizing.Check;
+import org.holdover.sizing.PvOption;
+import org.holdover.sizing.SolarDesign;
 import org.holdover.sizing.SizingResult;
 
 /** The short console summary of a sizing. Presents the engine's numbers; computes none. */
@@ -42,6 +44,7 @@ final class ConsoleSummary {
                     b.modules(), b.module().id(), b.series(), b.strings(), b.bankEnergyWh() / 1000.0, b.bankNominalV());
             out.printf(Locale.ROOT, "  battery must deliver %,.0f Wh DC over %.0f h (inverter %.1f %% efficient over it, idle draw included)%n",
                     r.energy().energyDcWh(), r.energy().dischargeHours(), 100 * r.energy().effectiveEfficiency());
+            pv(r, out);
             for (BusOption o : r.buses()) {
                 if (o != r.chosen()) {
                     out.printf(Locale.ROOT, "    %4.0f V bus: %s%n", o.busClassV(), o.reason());
@@ -60,12 +63,35 @@ final class ConsoleSummary {
             }
             for (Check c : r.advisories()) {
                 if (!c.passes()) {
-                    out.printf(Locale.ROOT, "  code limit to look at: %s %s %s above %s %s (%s)%n", c.label(), num(c.value()),
-                            c.unit(), num(c.limit()), c.unit(), c.basis());
+                    out.printf(Locale.ROOT, "  limit to look at: %s %s %s %s %s %s (%s)%n", c.label(), num(c.value()),
+                            c.unit(), c.sense() == Check.Sense.AT_MOST ? "above" : "below", num(c.limit()), c.unit(), c.basis());
                 }
             }
         }
         out.println(Cautions.SHORT);
+    }
+
+    private static final String[] MONTHS = {"January", "February", "March", "April", "May", "June", "July", "August",
+        "September", "October", "November", "December"};
+
+    private static void pv(SizingResult r, PrintWriter out) {
+        SolarDesign sd = r.solar();
+        if (sd == null) {
+            out.println("  PV: not sized, the project has no solar section (PV is optional)");
+            return;
+        }
+        PvOption o = sd.chosen();
+        if (o == null) {
+            out.println("  PV: none could be sized: " + sd.reason());
+            return;
+        }
+        out.printf(Locale.ROOT, "  PV: %d × %s (%d per string × %d strings) on %d × %s, %,.0f W STC, tilt %.0f°%n",
+                o.modules(), o.module().id(), o.candidate().modulesPerString(), o.candidate().stringsPerController(),
+                o.candidate().controllerCount(), o.controller().id(), o.candidate().totalStcW(), o.tiltDeg());
+        int m = o.sizing().worstMonth();
+        out.printf(Locale.ROOT, "  PV sized by %s: %s needs %,.0f W (%.2f h/day of full sun on the array); %s%n",
+                sd.method() == SolarDesign.Method.WORST_MONTH ? "the worst month" : "the refill after the hardest outage",
+                MONTHS[m], o.sizing().requiredStcW(), o.peakSunHours()[m], sd.setup().resource());
     }
 
     private static String num(double v) {

@@ -79,15 +79,25 @@ public final class ArrayChooser {
         return List.copyOf(out);
     }
 
+    /** STC power of one string × the PWM power ratio (1 for MPPT), W. */
+    public static double effectiveStringW(PvModule m, int modulesPerString, double pwmRatio) {
+        return m.stc().powerW() * modulesPerString * pwmRatio;
+    }
+
+    /**
+     * Fewest strings that reach the required power: ⌈required ÷ effective string W − 1e-9⌉, at least 1 and at
+     * most 1000 (the 1e-9 keeps a requirement met exactly from asking for one more string).
+     */
+    public static int stringsNeeded(double requiredStcW, double effectiveStringW) {
+        int total = effectiveStringW > 0 ? (int) Math.min(1000, Math.ceil(requiredStcW / effectiveStringW - 1e-9)) : 1;
+        return Math.max(1, total);
+    }
+
     private static ArrayCandidate best(PvModule m, ChargeController c, int n, Input in) {
         StringDesignConditions cond = in.conditions();
-        double stringW = m.stc().powerW() * n;
         double ratio = c.type() == ControllerType.PWM
                 ? PwmOperatingPoint.stringPowerRatio(m, n, cond.batteryOperatingV(), 25.0) : 1.0;
-        double effectiveStringW = stringW * ratio;
-        int totalStrings = effectiveStringW > 0
-                ? (int) Math.min(1000, Math.ceil(in.requiredStcW() / effectiveStringW - 1e-9)) : 1;
-        totalStrings = Math.max(1, totalStrings);
+        int totalStrings = stringsNeeded(in.requiredStcW(), effectiveStringW(m, n, ratio));
         ArrayCandidate firstRequired = null;
         ArrayCandidate one = null;
         for (int k = 1; k <= in.maxControllers(); k++) {

@@ -34,6 +34,15 @@ public final class ControllerSeries {
         return controller;
     }
 
+    /** Highest output, W: rated output current × battery voltage (above it the controller clips). */
+    public double maxOutputW() {
+        return maxOutputW(controller, batteryV);
+    }
+
+    static double maxOutputW(ChargeController controller, double batteryV) {
+        return controller.ratedOutputCurrentA() * batteryV;
+    }
+
     /** The battery voltage the hourly limits and currents use, V. */
     public double batteryV() {
         return batteryV;

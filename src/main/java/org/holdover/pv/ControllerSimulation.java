@@ -31,7 +31,7 @@ public final class ControllerSimulation {
         int n = dc.hours();
         double vb = conditions.batteryOperatingV();
         double eta = controller.efficiency();
-        double maxOut = controller.ratedOutputCurrentA() * vb;
+        double maxOut = ControllerSeries.maxOutputW(controller, vb);
         PvArray array = dc.array();
         double[] avail = new double[n];
         double[] givenUp = new double[n];

@@ -33,20 +33,41 @@ public final class PwmOperatingPoint {
         if (v <= 0 || vmp <= 0 || voc <= vmp) {
             return v <= 0 ? 0.0 : (v >= voc ? 0.0 : 1.0);
         }
-        double i;
-        if (v <= vmp) {
-            i = isc - (isc - imp) * v / vmp;
-        } else if (v < voc) {
-            i = imp * (voc - v) / (voc - vmp);
-        } else {
-            i = 0.0;
-        }
+        double i = currentA(module, v, cellTempC);
         double r = v * i / (vmp * imp);
         return Math.max(0.0, Math.min(1.0, r));
     }
 
+    /**
+     * The module's current at 1000 W/m² on the two-line I–V curve: I_sc − (I_sc − I_mp) V / V_mp up to V_mp, then
+     * I_mp (V_oc − V) / (V_oc − V_mp) up to V_oc, then 0; all at the cell temperature.
+     *
+     * @param module         the module
+     * @param moduleVoltageV voltage across the module, V, &gt; 0
+     * @param cellTempC      cell temperature, °C
+     * @return current, A, ≥ 0
+     */
+    public static double currentA(PvModule module, double moduleVoltageV, double cellTempC) {
+        double vmp = module.vmpAtCellV(cellTempC);
+        double voc = module.vocAtCellV(cellTempC);
+        double isc = module.iscAtA(1000.0, cellTempC);
+        double imp = module.impAtA(1000.0, cellTempC);
+        double v = moduleVoltageV;
+        if (v <= vmp) {
+            return isc - (isc - imp) * v / vmp;
+        } else if (v < voc) {
+            return imp * (voc - v) / (voc - vmp);
+        }
+        return 0.0;
+    }
+
     /** The ratio for a string of {@code modulesPerString} held at battery voltage {@code batteryV}. */
     public static double stringPowerRatio(PvModule module, int modulesPerString, double batteryV, double cellTempC) {
-        return powerRatio(module, batteryV / modulesPerString, cellTempC);
+        return powerRatio(module, moduleVoltageV(batteryV, modulesPerString), cellTempC);
+    }
+
+    /** Voltage across one module when a string of {@code modulesPerString} is held at {@code batteryV}, V. */
+    public static double moduleVoltageV(double batteryV, int modulesPerString) {
+        return batteryV / modulesPerString;
     }
 }

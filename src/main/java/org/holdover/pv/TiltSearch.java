@@ -118,29 +118,53 @@ public final class TiltSearch {
     }
 
     public static Result search(Input in) {
-        PvArray reference = new PvArray(in.module(), 1, 1);
+        return searchAll(in, List.of(in.module())).get(0);
+    }
+
+    /**
+     * The search for several modules at once, each exactly as {@link #search} with that module in place of
+     * {@code in.module()}; the plane-of-array irradiance of each tilt is computed once for all of them.
+     *
+     * @param in      the search (its module is not used)
+     * @param modules the modules, not empty
+     * @return one result per module, in the same order
+     */
+    public static List<Result> searchAll(Input in, List<PvModule> modules) {
+        if (modules.isEmpty()) {
+            throw new IllegalArgumentException("need at least one module");
+        }
         double[] air = in.weather().airTempC();
-        List<Option> options = new ArrayList<>();
-        int best = 0;
+        List<List<Option>> options = new ArrayList<>();
+        int[] best = new int[modules.size()];
+        for (int i = 0; i < modules.size(); i++) {
+            options.add(new ArrayList<>());
+        }
         for (double tilt : in.tiltsDeg()) {
             PoaSettings s = in.settings().withOrientation(
                     new SurfaceOrientation(tilt, in.settings().orientation().azimuthDeg()));
             PoaSeries poa = PlaneOfArray.hourly(in.weather(), in.sunPath(), s);
-            ArrayDcSeries dc = ArrayDcSeries.compute(reference, poa, air, in.losses());
             double[] psh = poa.monthlyPeakSunHours(false);
-            double[] pr = dc.monthlyDcPerformanceRatio();
-            double[] derate = new double[12];
-            for (int m = 0; m < 12; m++) {
-                // A month without sun has no derate; any positive value gives +∞ need when there is load.
-                derate[m] = Double.isNaN(pr[m]) || pr[m] <= 0 ? 1.0 : pr[m] * in.controllerEfficiency();
-            }
-            MonthlySizingResult r = WorstMonthSizing.size(new WorstMonthSizing.Input(in.dailyEnergyWh(), psh, derate,
-                    in.batteryRoundTripEfficiency()));
-            options.add(new Option(tilt, psh, derate, r));
-            if (r.requiredStcW() < options.get(best).sizing().requiredStcW()) {
-                best = options.size() - 1;
+            for (int i = 0; i < modules.size(); i++) {
+                ArrayDcSeries dc = ArrayDcSeries.compute(new PvArray(modules.get(i), 1, 1), poa, air, in.losses());
+                double[] pr = dc.monthlyDcPerformanceRatio();
+                double[] derate = new double[12];
+                for (int m = 0; m < 12; m++) {
+                    // A month without sun has no derate; any positive value gives +∞ need when there is load.
+                    derate[m] = Double.isNaN(pr[m]) || pr[m] <= 0 ? 1.0 : pr[m] * in.controllerEfficiency();
+                }
+                MonthlySizingResult r = WorstMonthSizing.size(new WorstMonthSizing.Input(in.dailyEnergyWh(), psh, derate,
+                        in.batteryRoundTripEfficiency()));
+                List<Option> mine = options.get(i);
+                mine.add(new Option(tilt, psh, derate, r));
+                if (r.requiredStcW() < mine.get(best[i]).sizing().requiredStcW()) {
+                    best[i] = mine.size() - 1;
+                }
             }
         }
-        return new Result(options, best);
+        List<Result> results = new ArrayList<>();
+        for (int i = 0; i < modules.size(); i++) {
+            results.add(new Result(options.get(i), best[i]));
+        }
+        return results;
     }
 }

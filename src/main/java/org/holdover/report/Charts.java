@@ -212,4 +212,52 @@ final class Charts {
         model.setShapeProperties(line);
         chart.plot(data);
     }
+
+    /**
+     * Bar chart of the controllers' output against what the battery needs from them, Wh per day by month (PV sheet,
+     * month rows starting at {@code firstRow}).
+     */
+    static void pvMonthly(Context ctx, SheetWriter s, int firstRow, int outCol, int needCol, int loadCol, int anchorRow) {
+        org.holdover.sizing.PvOption o = ctx.r.solar().chosen();
+        XSSFDrawing d = drawing(s);
+        XSSFClientAnchor anchor = d.createAnchor(0, 0, 0, 0, 0, anchorRow, 8, anchorRow + 20);
+        XSSFChart chart = d.createChart(anchor);
+        chart.setTitleText("PV energy to the battery against what it must deliver, Wh per day by month");
+        chart.setTitleOverlay(false);
+        XDDFChartLegend legend = chart.getOrAddLegend();
+        legend.setPosition(LegendPosition.BOTTOM);
+        XDDFCategoryAxis x = chart.createCategoryAxis(AxisPosition.BOTTOM);
+        XDDFValueAxis y = chart.createValueAxis(AxisPosition.LEFT);
+        y.setCrosses(AxisCrosses.AUTO_ZERO);
+        y.setTitle("Wh per day");
+        Double[] out = new Double[12];
+        Double[] need = new Double[12];
+        Double[] load = new Double[12];
+        double[] loadDc = ctx.r.solar().loadDcWhPerDay();
+        for (int m = 0; m < 12; m++) {
+            out[m] = o.outputWhPerDay()[m];
+            need[m] = o.needWhPerDay()[m];
+            load[m] = loadDc[m];
+        }
+        XDDFDataSource<String> cats = XDDFDataSourcesFactory.fromArray(LoadsSheet.MONTHS.clone(),
+                s.ref(firstRow, 0, firstRow + 11, 0), 0);
+        XDDFBarChartData data = (XDDFBarChartData) chart.createData(ChartTypes.BAR, x, y);
+        data.setBarDirection(BarDirection.COL);
+        bar(data, cats, XDDFDataSourcesFactory.fromArray(out, s.ref(firstRow, outCol, firstRow + 11, outCol), outCol),
+                "Controllers' output", PresetColor.GOLDENROD);
+        bar(data, cats, XDDFDataSourcesFactory.fromArray(need, s.ref(firstRow, needCol, firstRow + 11, needCol), needCol),
+                "Output needed", PresetColor.STEEL_BLUE);
+        bar(data, cats, XDDFDataSourcesFactory.fromArray(load, s.ref(firstRow, loadCol, firstRow + 11, loadCol), loadCol),
+                "Loads' DC energy", PresetColor.SLATE_GRAY);
+        chart.plot(data);
+    }
+
+    private static void bar(XDDFBarChartData data, XDDFDataSource<String> cats, XDDFNumericalDataSource<Double> vals,
+                            String title, PresetColor color) {
+        XDDFChartData.Series series = data.addSeries(cats, vals);
+        series.setTitle(title, null);
+        XDDFShapeProperties props = new XDDFShapeProperties();
+        props.setFillProperties(new XDDFSolidFillProperties(XDDFColor.from(color)));
+        series.setShapeProperties(props);
+    }
 }

@@ -19,8 +19,10 @@ final class Context {
     static final String CURVES = "Inverter curves";
     static final String BUS = "DC bus";
     static final String BATTERY = "Battery";
+    static final String PV = "PV";
     static final String WIRING = "Wiring";
     static final String HOURLY = "Hourly";
+    static final String PV_HOURLY = "PV hourly";
     static final String SIMULATION = "Year simulation";
     static final String MONTHLY = "Monthly";
     static final String INPUTS = "Inputs";
@@ -28,13 +30,15 @@ final class Context {
     static final String CONDUCTORS = "Conductor tables";
     static final String CAUTIONS = "Cautions";
 
-    static final List<String> ORDER = List.of(SUMMARY, LOADS, MOTORS, DAYS, INVERTERS, CURVES, BUS, BATTERY, WIRING, HOURLY, SIMULATION, MONTHLY,
-            INPUTS, TABLES, CONDUCTORS, CAUTIONS);
+    static final List<String> ORDER = List.of(SUMMARY, LOADS, MOTORS, DAYS, INVERTERS, CURVES, BUS, BATTERY, PV, WIRING, HOURLY,
+            PV_HOURLY, SIMULATION, MONTHLY, INPUTS, TABLES, CONDUCTORS, CAUTIONS);
 
     final SXSSFWorkbook wb;
     final Styles styles;
     final SizingResult r;
     private final Map<String, SheetWriter> sheets = new HashMap<>();
+    /** Check id → the formulas of its value and limit, for checks computed on sheets other than Summary. */
+    final Map<String, String[]> checkCells = new HashMap<>();
 
     Context(SXSSFWorkbook wb, SizingResult r) {
         this.wb = wb;
@@ -42,7 +46,7 @@ final class Context {
         this.styles = new Styles(wb);
         for (String name : ORDER) {
             SXSSFSheet s = wb.createSheet(name);
-            if (!name.equals(HOURLY) && !name.equals(SIMULATION)) {
+            if (!name.equals(HOURLY) && !name.equals(PV_HOURLY) && !name.equals(SIMULATION)) {
                 s.setRandomAccessWindowSize(-1);
             }
             sheets.put(name, new SheetWriter(wb, s, styles));

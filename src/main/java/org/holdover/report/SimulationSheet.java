@@ -118,13 +118,19 @@ final class SimulationSheet {
         final double[] pvToInverterW = t.pvToInverterW();
         final double[] soc = t.soc();
         final double[] unmetW = t.unmetW();
+        boolean pvLinked = ctx.r.solar() != null && ctx.r.solar().chosen() != null;
+        boolean pwm = pvLinked && ctx.r.solar().chosen().controller().controller().type() == org.holdover.pv.ControllerType.PWM;
         double e = b.initialSoc() * b.nominalEnergyWh();
         for (int h = 0; h < n; h++) {
             int row = first + h;
             String R = String.valueOf(row + 1);
             s.input(row, 0, h, Styles.GENERAL);
             s.formula(row, 1, hourly.quoted() + "!" + SheetWriter.col(HourlySheet.loadColumn(ctx)) + (HourlySheet.FIRST + h + 1), load[h], Styles.D1);
-            s.input(row, 2, pvArr[h], Styles.D1);
+            if (pvLinked) {
+                s.formula(row, 2, "INDEX(PVH_DcW,A" + R + "+1)" + (pwm ? "-INDEX(PVH_GivenUpW,A" + R + "+1)" : ""), pvArr[h], Styles.D1);
+            } else {
+                s.input(row, 2, pvArr[h], Styles.D1);
+            }
             s.input(row, 3, grid[h] ? 1 : 0, Styles.GENERAL);
             s.input(row, 4, nc[h] ? 1 : 0, Styles.GENERAL);
             s.formula(row, 5, h == 0 ? "S_Init*S_Enom" : "Y" + row, e, Styles.D1);

@@ -74,7 +74,7 @@ final class SummarySheet {
             row = paragraph(ctx, s, row, r.year() == null ? "The year was not simulated: an off-grid system needs its PV array for that."
                     : "Daily-energy chain against the simulated year: " + r.year().comparison(r.bank()) + "; " + r.year().life() + ".");
             row++;
-            s.text(row++, 0, "Code limits to look at (they do not reject the design; the authority having jurisdiction decides)", ctx.styles.subtitle);
+            s.text(row++, 0, "Limits to look at (they do not reject the design; for code limits the authority having jurisdiction decides)", ctx.styles.subtitle);
             s.header(row++, 0, "Limit", "Design value", "Limit", "Unit", "Result", "Margin", "Basis");
             for (Check c : r.advisories()) {
                 row = check(ctx, s, row, c, bankRow);
@@ -141,7 +141,7 @@ final class SummarySheet {
         int invRow = InvertersSheet.FIRST + r.inverters().indexOf(r.inverter());
         s.formula(row++, 1, ctx.sheet(Context.INVERTERS).ref(invRow, InvertersSheet.PRICE) + "+" + bat.ref(bankRow, BatterySheet.COST),
                 r.inverter().spec().price() + b.price(), Styles.INT);
-        return row;
+        return PvSheet.summary(ctx, s, row);
     }
 
     private static int ref(SheetWriter s, int row, String label, String name, double value, String unit, String format) {
@@ -210,7 +210,13 @@ final class SummarySheet {
             case "dc.surgeA" -> new String[] {"W_SurgeA", "W_PeakLimitA"};
             case "dc.shortCircuit" -> new String[] {"W_ScA", "W_OrdinaryLimitA"};
             case "sim.unmet" -> new String[] {"S_UnmetWh", "S_UnmetLimit"};
-            default -> throw new IllegalStateException("no workbook cells for check " + c.id() + " (" + c.label().toLowerCase(Locale.ROOT) + ")");
+            default -> {
+                String[] cells = ctx.checkCells.get(c.id());
+                if (cells == null) {
+                    throw new IllegalStateException("no workbook cells for check " + c.id() + " (" + c.label().toLowerCase(Locale.ROOT) + ")");
+                }
+                yield cells;
+            }
         };
     }
 }

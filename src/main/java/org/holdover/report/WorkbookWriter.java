@@ -82,14 +82,16 @@ public final class WorkbookWriter {
             DayGridSheet.write(ctx);
             List<CurvesSheet.Block> blocks = CurvesSheet.write(ctx);
             HourlySheet.write(ctx);
-            SimulationSheet.write(ctx, result.year());
-            MonthlySheet.write(ctx, result.year());
             LoadsSheet.writeFigures(ctx);
             MotorsSheet.writeSurge(ctx);
             InvertersSheet.write(ctx, blocks);
             BusSheet.write(ctx);
             int bankRow = BatterySheet.write(ctx);
             WiringSheet.write(ctx, bankRow, chosenDc(result));
+            PvHourlySheet.write(ctx);
+            PvSheet.write(ctx, bankRow);
+            SimulationSheet.write(ctx, result.year());
+            MonthlySheet.write(ctx, result.year());
             SummarySheet.write(ctx, bankRow);
             CautionsSheet.write(ctx);
             printSetup(ctx);

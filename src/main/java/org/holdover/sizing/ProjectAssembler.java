@@ -181,10 +181,11 @@ public final class ProjectAssembler {
         WiringRules wiring = wiring(p, assumptions, warnings, project);
         double outage = backup ? p.backup().outageHours() : 0;
         double days = backup ? 0 : p.offGrid().autonomyDays();
+        SolarSetup solar = p.solar() == null ? null : SolarAssembler.assemble(project, year, catalog, assumptions, warnings);
         return new SizingInput(p.name(), p.mode(), volts, site.ac().frequencyHz(), split, invAmbient, cold, margin, maxA,
                 maxParallel, chem, dod, eol, b == null ? null : b.location(), outage, days, loads, catalog, assumptions,
                 warnings, p.notes() == null ? List.of() : p.notes(), measured == null ? null : measured.hourlyW(), scale,
-                served, wiring, unmet(p, assumptions), designTemp(site, cold));
+                served, wiring, unmet(p, assumptions), designTemp(site, cold), solar);
     }
 
     private static double unmet(ProjectInput p, List<Assumption> assumptions) {

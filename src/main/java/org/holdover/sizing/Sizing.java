@@ -64,7 +64,7 @@ public final class Sizing {
             buses.add(option);
         }
         if (chosen == null) {
-            return new SizingResult(in, assessments, buses, null, null, null, List.of(), List.of(), 0, 0, null);
+            return new SizingResult(in, assessments, buses, null, null, null, List.of(), List.of(), 0, 0, null, null);
         }
         InverterAssessment inv = chosen.inverter();
         BankDesign bank = chosen.bank();
@@ -77,18 +77,37 @@ public final class Sizing {
         advisories.add(new Check("dc.shortCircuit", "Prospective short-circuit current at the battery terminals",
                 dc.shortCircuit().atBatteryTerminalsA(), org.holdover.dc.ShortCircuit.COMMON_ORDINARY_DEVICE_LIMIT_A, "A",
                 Check.Sense.AT_MOST, "above this, use a DC device rated to interrupt it (common practice, no source)"));
+        SolarDesign solar = in.solar() == null ? null : PvSizing.size(in, chosen, chosenEnergy);
+        if (solar != null) {
+            checks.addAll(solar.checks());
+            advisories.addAll(solar.advisories());
+        }
         LossModel loss = inv.spec().loss();
         double[] batteryTemp = new double[in.loads().calendar().hours()];
         java.util.Arrays.fill(batteryTemp, in.batteryDesignC());
         YearCheck year = null;
-        if (in.mode() == ProjectInput.Mode.BACKUP) {
-            // Without PV an off-grid year has nothing to recharge the bank: it is simulated once the array is known.
-            year = YearCheck.run(in, bank, loss, chosenEnergy, null, 1.0, YearCheck.NO_PV_LIMIT_W, in.maxUnmetFraction(), batteryTemp);
+        double[] pvW = null;
+        double ccEff = 1.0;
+        double ccLimit = YearCheck.NO_PV_LIMIT_W;
+        if (solar != null && solar.chosen() != null) {
+            PvOption o = solar.chosen();
+            int n = in.loads().calendar().hours();
+            pvW = new double[n];
+            for (int h = 0; h < n; h++) {
+                // What the controller can draw from the array (a PWM controller gives up the rest).
+                pvW[h] = o.output().availableDcW(h) - o.output().pwmGivenUpW(h);
+            }
+            ccEff = o.controller().controller().efficiency();
+            ccLimit = o.output().maxOutputW();
+        }
+        if (in.mode() == ProjectInput.Mode.BACKUP || pvW != null) {
+            // Without PV an off-grid year has nothing to recharge the bank, so it is not simulated.
+            year = YearCheck.run(in, bank, loss, chosenEnergy, pvW, ccEff, ccLimit, in.maxUnmetFraction(), batteryTemp);
             checks.add(new Check("sim.unmet", "Unmet energy over the simulated year", year.metrics().reliability().unmetWh(),
                     year.unmetLimitWh(), "Wh", Check.Sense.AT_MOST, "project reliability target; hour-by-hour energy balance"));
         }
         return new SizingResult(in, assessments, buses, chosen, chosenEnergy, bank.requirement(), checks, advisories,
-                WeightedEfficiency.CEC.of(loss), WeightedEfficiency.EURO.of(loss), year);
+                WeightedEfficiency.CEC.of(loss), WeightedEfficiency.EURO.of(loss), year, solar);
     }
 
     static InverterAssessment assess(InverterSpec s, SizingInput in) {

@@ -38,6 +38,7 @@ import org.holdover.project.ProjectInput;
  * @param wiring            cable runs and conductor rules
  * @param maxUnmetFraction  unmet energy the simulated year may leave, fraction of the served energy
  * @param batteryDesignC    typical battery temperature, °C (charging limits in the simulated year)
+ * @param solar             the solar resource and array settings, or null when the project has no solar section
  */
 public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms, double frequencyHz, boolean splitPhase,
                           double inverterAmbientC, double batteryColdestC, double inverterMargin,
@@ -46,7 +47,7 @@ public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms
                           double autonomyDays, LoadAnalysis loads, Catalog catalog, List<Assumption> assumptions,
                           List<Problem> warnings, List<String> notes, double[] measuredW,
                           double profileScale, boolean profileServed, WiringRules wiring,
-                          double maxUnmetFraction, double batteryDesignC) {
+                          double maxUnmetFraction, double batteryDesignC, SolarSetup solar) {
     public SizingInput {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(mode, "mode");

@@ -17,12 +17,13 @@ import org.holdover.battery.BankRequirement;
  * @param advisories   code limits that do not reject the design but must be looked at (fire-code energy limits)
  * @param cecEfficiency     CEC weighted efficiency of the chosen inverter's loss model
  * @param euroEfficiency    European weighted efficiency of the chosen inverter's loss model
- * @param year              the chosen system over a simulated year (null when none was chosen)
+ * @param year              the chosen system over a simulated year (null when none was chosen or off grid without PV)
+ * @param solar             the PV array and charge controller(s), or null (no solar section, or no system chosen)
  */
 public record SizingResult(SizingInput input, List<InverterAssessment> inverters, List<BusOption> buses,
                            BusOption chosen, EnergyBasis energy, BankRequirement requirement, List<Check> checks,
                            List<Check> advisories, double cecEfficiency, double euroEfficiency,
-                           YearCheck year) {
+                           YearCheck year, SolarDesign solar) {
 
     public SizingResult {
         inverters = List.copyOf(inverters);

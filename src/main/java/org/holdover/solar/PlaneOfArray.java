@@ -19,7 +19,7 @@ import java.util.Objects;
 public final class PlaneOfArray {
 
     /** Floor on cos θ_z in R_b: cos 89° (our choice). */
-    static final double MIN_COS_ZENITH = Math.cos(Math.toRadians(89.0));
+    public static final double MIN_COS_ZENITH = Math.cos(Math.toRadians(89.0));
 
     private PlaneOfArray() {
     }
@@ -51,14 +51,16 @@ public final class PlaneOfArray {
         cosTheta = Math.max(-1.0, Math.min(1.0, cosTheta));
         double incidenceDeg = Math.toDegrees(Math.acos(cosTheta));
         boolean sunUp = zenithDeg < 90.0;
-        double cosBeta = Math.cos(Math.toRadians(o.tiltDeg()));
+        double cosBeta = o.cosTilt();
         double beam = sunUp ? dni * Math.max(0.0, cosTheta) : 0.0;
-        double isoView = (1 + cosBeta) / 2.0;
+        double isoView = o.skyViewFactor();
         double sky;
+        double a = 0.0;
+        double rb = 0.0;
         if (s.skyModel() == SkyModel.HAY_DAVIES && sunUp) {
-            double a = Math.min(1.0, dni / g0n);
+            a = Math.min(1.0, dni / g0n);
             double cosZ = Math.max(Math.cos(Math.toRadians(zenithDeg)), MIN_COS_ZENITH);
-            double rb = Math.max(0.0, cosTheta) / cosZ;
+            rb = Math.max(0.0, cosTheta) / cosZ;
             sky = dhi * (a * rb + (1 - a) * isoView);
         } else {
             sky = dhi * isoView;
@@ -67,7 +69,7 @@ public final class PlaneOfArray {
         double iam = sunUp ? s.iam().atCos(cosTheta) : 0.0;
         double total = beam + sky + ground;
         double effective = beam * iam + sky + ground;
-        return new PoaIrradiance(incidenceDeg, beam, iam, sky, ground, total, effective);
+        return new PoaIrradiance(incidenceDeg, beam, iam, sky, ground, total, effective, cosTheta, a, rb);
     }
 
     /**
@@ -93,6 +95,9 @@ public final class PlaneOfArray {
         double[] ground = new double[n];
         double[] total = new double[n];
         double[] eff = new double[n];
+        double[] cos = new double[n];
+        double[] aniso = new double[n];
+        double[] rb = new double[n];
         for (int h = 0; h < n; h++) {
             PoaIrradiance p = compute(sunPath.zenithDeg(h), sunPath.azimuthDeg(h), weather.ghiWm2(h),
                     weather.dniWm2(h), weather.dhiWm2(h), sunPath.extraterrestrialNormalWm2(h), settings);
@@ -103,7 +108,10 @@ public final class PlaneOfArray {
             ground[h] = p.groundWm2();
             total[h] = p.totalWm2();
             eff[h] = p.effectiveWm2();
+            cos[h] = p.cosIncidence();
+            aniso[h] = p.anisotropyIndex();
+            rb[h] = p.beamRatio();
         }
-        return new PoaSeries(settings, inc, beam, iam, sky, ground, total, eff);
+        return new PoaSeries(settings, inc, beam, iam, sky, ground, total, eff, cos, aniso, rb);
     }
 }

@@ -10,9 +10,14 @@ package org.holdover.solar;
  * @param groundWm2            ground-reflected irradiance on the plane, GHI · ρ · (1 − cos β) / 2
  * @param totalWm2             beam + sky diffuse + ground, before reflection loss (plane-of-array irradiance)
  * @param effectiveWm2         beam · IAM + sky diffuse + ground: what reaches the cells
+ * @param cosIncidence         cos θ, held in [−1, 1] (negative: the sun is behind the plane)
+ * @param anisotropyIndex      Hay–Davies A = min(1, DNI / G_on) while the sun is up; 0 for the isotropic sky
+ *                             or with the sun down
+ * @param beamRatio            Hay–Davies R_b = max(0, cos θ) / max(cos θ_z, cos 89°) while the sun is up; 0 for
+ *                             the isotropic sky or with the sun down
  */
 public record PoaIrradiance(double incidenceDeg, double beamWm2, double iam, double skyDiffuseWm2, double groundWm2,
-        double totalWm2, double effectiveWm2) {
+        double totalWm2, double effectiveWm2, double cosIncidence, double anisotropyIndex, double beamRatio) {
 
     public PoaIrradiance {
         if (!(beamWm2 >= 0 && skyDiffuseWm2 >= 0 && groundWm2 >= 0)) {
@@ -26,6 +31,12 @@ public record PoaIrradiance(double incidenceDeg, double beamWm2, double iam, dou
         }
         if (effectiveWm2 > totalWm2 + 1e-9) {
             throw new IllegalArgumentException("effective irradiance cannot exceed the total");
+        }
+        if (!(cosIncidence >= -1 && cosIncidence <= 1)) {
+            throw new IllegalArgumentException("cosIncidence must be in [-1, 1], got " + cosIncidence);
+        }
+        if (!(anisotropyIndex >= 0 && anisotropyIndex <= 1 && beamRatio >= 0)) {
+            throw new IllegalArgumentException("anisotropy index must be in [0, 1] and R_b >= 0");
         }
     }
 

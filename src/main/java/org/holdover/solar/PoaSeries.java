@@ -16,9 +16,13 @@ public final class PoaSeries {
     private final double[] groundWm2;
     private final double[] totalWm2;
     private final double[] effectiveWm2;
+    private final double[] cosIncidence;
+    private final double[] anisotropyIndex;
+    private final double[] beamRatio;
 
     PoaSeries(PoaSettings settings, double[] incidenceDeg, double[] beamWm2, double[] iam, double[] skyDiffuseWm2,
-            double[] groundWm2, double[] totalWm2, double[] effectiveWm2) {
+            double[] groundWm2, double[] totalWm2, double[] effectiveWm2, double[] cosIncidence,
+            double[] anisotropyIndex, double[] beamRatio) {
         this.settings = Objects.requireNonNull(settings);
         this.incidenceDeg = incidenceDeg;
         this.beamWm2 = beamWm2;
@@ -27,6 +31,24 @@ public final class PoaSeries {
         this.groundWm2 = groundWm2;
         this.totalWm2 = totalWm2;
         this.effectiveWm2 = effectiveWm2;
+        this.cosIncidence = cosIncidence;
+        this.anisotropyIndex = anisotropyIndex;
+        this.beamRatio = beamRatio;
+    }
+
+    /** cos θ of hour h, held in [−1, 1] (see {@link PoaIrradiance#cosIncidence()}). */
+    public double cosIncidence(int h) {
+        return cosIncidence[h];
+    }
+
+    /** Hay–Davies anisotropy index A of hour h (see {@link PoaIrradiance#anisotropyIndex()}). */
+    public double anisotropyIndex(int h) {
+        return anisotropyIndex[h];
+    }
+
+    /** Hay–Davies beam ratio R_b of hour h (see {@link PoaIrradiance#beamRatio()}). */
+    public double beamRatio(int h) {
+        return beamRatio[h];
     }
 
     public PoaSettings settings() {

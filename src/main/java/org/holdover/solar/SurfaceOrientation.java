@@ -23,4 +23,14 @@ public record SurfaceOrientation(double tiltDeg, double azimuthDeg) {
     public static SurfaceOrientation facingEquator(Site site, double tiltDeg) {
         return new SurfaceOrientation(tiltDeg, site.latitudeDeg() > 0 ? 180.0 : 0.0);
     }
+
+    /** cos β, the cosine of the tilt. */
+    public double cosTilt() {
+        return Math.cos(Math.toRadians(tiltDeg));
+    }
+
+    /** The plane's view factor to the sky, (1 + cos β) / 2 (isotropic sky diffuse). */
+    public double skyViewFactor() {
+        return (1 + cosTilt()) / 2.0;
+    }
 }

@@ -49,7 +49,7 @@ class ProjectReaderFuzzTest {
         seeds.add(read(Path.of("examples/ridge-cabin-offgrid.yaml")));
         seeds.add(resource("/org/holdover/cli/starter-backup.yaml"));
         seeds.add(resource("/org/holdover/cli/starter-off-grid.yaml"));
-        seeds.add(read(Path.of("examples/ridge-cabin-offgrid.yaml")).replace("notes:\n", EXTRA + "notes:\n  - \"=1+1\"\n"));
+        seeds.add(resource("/org/holdover/project/cabin-without-solar.yaml").replace("notes:\n", EXTRA + "notes:\n  - \"=1+1\"\n"));
         return seeds;
     }
 
