@@ -137,13 +137,10 @@ public final class LoadModel {
             monthly[cal.month(h) - 1] += loadW[h];
             total += loadW[h];
         }
-        int worst = 1;
         for (int m = 1; m <= 12; m++) {
             monthly[m - 1] /= cal.daysInMonth(m);
-            if (monthly[m - 1] > monthly[worst - 1]) {
-                worst = m;
-            }
         }
+        int worst = Picks.firstNearMax(monthly) + 1;
         int peakLoadHour = argMax(loadW);
         int runWHour = argMax(runningW);
         int runVaHour = argMax(runningVa);

@@ -51,7 +51,7 @@ final class BatterySheet {
             s.formula(r, 2, "MAX(H_WindowWh)", e.energyDcWh(), Styles.INT);
             s.name("EnergyDcWh", r++, 2);
             s.text(r, 0, "…window starts at hour of the year");
-            s.formula(r, 2, "MATCH(EnergyDcWh,H_WindowWh,0)-1", e.windowStartHour(), Styles.GENERAL);
+            s.formula(r, 2, "MATCH(1,H_WindowNear,0)-1", e.windowStartHour(), Styles.GENERAL);
             s.name("WindowStart", r++, 2);
             s.text(r, 0, "AC energy served in that window, Wh");
             s.formula(r, 2, "SUMIFS(H_LoadW,H_Hour,\">=\"&WindowStart,H_Hour,\"<\"&(WindowStart+WindowHours))", e.energyAcWh(), Styles.INT);
@@ -60,17 +60,20 @@ final class BatterySheet {
             s.formula(r, 2, "WindowHours", e.dischargeHours(), Styles.D1);
             s.name("DischargeH", r++, 2);
         } else {
-            s.header(r++, 0, "Month", "Days", "DC Wh per day");
+            s.header(r++, 0, "Month", "Days", "DC Wh per day", "Within 1e-9 of the most (1/0)");
             int first = r;
             for (int m = 1; m <= 12; m++) {
                 s.text(r, 0, LoadsSheet.MONTHS[m - 1]);
                 s.formula(r, 1, "INDEX(MonthDays," + m + ")", ctx.r.input().loads().calendar().daysInMonth(m), Styles.INT);
                 s.formula(r, 2, "SUMIFS(H_DcW,H_Month," + m + ")/B" + (r + 1), e.monthlyDailyDcWh()[m - 1], Styles.INT);
+                s.formula(r, 3, "IF(C" + (r + 1) + ">=MAX(" + s.ref(first, 2, first + 11, 2) + ")*(1-" + org.holdover.load.Picks.NEAR + "),1,0)",
+                        org.holdover.load.Picks.nearMax(e.monthlyDailyDcWh())[m - 1] ? 1 : 0, Styles.INT);
                 r++;
             }
+            s.name("MonthlyDcNear", first, 3, r - 1, 3);
             s.name("MonthlyDcWh", first, 2, r - 1, 2);
             s.text(r, 0, "Worst month (most DC energy per day)");
-            s.formula(r, 2, "MATCH(MAX(MonthlyDcWh),MonthlyDcWh,0)", e.worstMonth(), Styles.GENERAL);
+            s.formula(r, 2, "MATCH(1,MonthlyDcNear,0)", e.worstMonth(), Styles.GENERAL);
             s.name("WorstDcMonth", r++, 2);
             s.text(r, 0, "DC energy over the days of autonomy, Wh");
             s.formula(r, 2, "AutonomyDays*INDEX(MonthlyDcWh,WorstDcMonth)", e.energyDcWh(), Styles.INT);

@@ -45,6 +45,7 @@ final class HourlySheet {
         final int cL1 = split ? c++ : -1, cL2 = split ? c++ : -1, cOL1 = split ? c++ : -1, cOL2 = split ? c++ : -1;
         final int cDc = dc ? c++ : -1;
         final int cWin = window ? c++ : -1;
+        final int cNear = window ? c++ : -1;
         s.text(hr, cHour, "Hour", ctx.styles.header);
         s.text(hr, cDate, "Date", ctx.styles.header);
         s.text(hr, cMonth, "Month", ctx.styles.header);
@@ -69,6 +70,7 @@ final class HourlySheet {
         }
         if (window) {
             s.text(hr, cWin, "DC energy of the " + e.windowHours() + " h outage starting here, Wh", ctx.styles.header);
+            s.text(hr, cNear, "Within 1e-9 of the hardest (1/0)", ctx.styles.header);
         }
         int n = cal.hours();
         int first = hr + 1;
@@ -94,8 +96,14 @@ final class HourlySheet {
         if (dc) {
             s.name("H_DcW", first, cDc, last, cDc);
         }
+        boolean[] near = null;
         if (window) {
             s.name("H_WindowWh", first, cWin, last - e.windowHours() + 1, cWin);
+            s.name("H_WindowNear", first, cNear, last - e.windowHours() + 1, cNear);
+            s.text(2, cWin - 1, "Hardest outage window, Wh");
+            s.formula(2, cWin, "MAX(H_WindowWh)", e.energyDcWh(), Styles.INT);
+            s.name("H_WindowMax", 2, cWin);
+            near = org.holdover.load.Picks.nearMax(e.windowDcWh());
         }
         double[] raw = ctx.r.input().measuredW();
         double[] prof = la.profileW();
@@ -143,6 +151,8 @@ final class HourlySheet {
                 String from = SheetWriter.col(cDc) + R;
                 String to = SheetWriter.col(cDc) + (r + e.windowHours());
                 s.formula(r, cWin, "SUM(" + from + ":" + to + ")", e.windowDcWh()[h], Styles.INT);
+                s.formula(r, cNear, "IF(" + SheetWriter.col(cWin) + R + ">=H_WindowMax*(1-" + org.holdover.load.Picks.NEAR + "),1,0)",
+                        near[h] ? 1 : 0, Styles.GENERAL);
             }
         }
         s.sheet.createFreezePane(1, first);

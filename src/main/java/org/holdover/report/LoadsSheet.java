@@ -141,19 +141,23 @@ final class LoadsSheet {
         }
         r++;
         s.text(r++, 0, "Served energy by month", ctx.styles.subtitle);
-        s.header(r++, 0, "Month", "Days", "Wh per day", "Month no.");
+        s.header(r++, 0, "Month", "Days", "Wh per day", "Month no.", "Within 1e-9 of the most (1/0)");
         int first = r;
         for (int m = 1; m <= 12; m++) {
             s.text(r, 0, MONTHS[m - 1]);
             s.formula(r, 1, "COUNTIFS(H_Month," + m + ",H_HourOfDay,0)", cal.daysInMonth(m), Styles.INT);
             s.formula(r, 2, "SUMIFS(H_LoadW,H_Month," + m + ")/B" + (r + 1), f.monthlyDailyEnergyWh()[m - 1], Styles.INT);
             s.input(r, 3, m, Styles.INT);
+            boolean near = org.holdover.load.Picks.nearMax(f.monthlyDailyEnergyWh())[m - 1];
+            s.formula(r, 4, "IF(C" + (r + 1) + ">=MAX(" + s.ref(first, 2, first + 11, 2) + ")*(1-" + org.holdover.load.Picks.NEAR + "),1,0)",
+                    near ? 1 : 0, Styles.INT);
             r++;
         }
+        s.name("MonthNear", first, 4, r - 1, 4);
         s.name("MonthDays", first, 1, r - 1, 1);
         s.name("MonthlyWh", first, 2, r - 1, 2);
         s.name("MonthNo", first, 3, r - 1, 3);
-        r = fig(s, r + 1, "Month with the most energy per day", "INDEX(MonthNo,MATCH(MAX(MonthlyWh),MonthlyWh,0))",
+        r = fig(s, r + 1, "Month with the most energy per day", "INDEX(MonthNo,MATCH(1,MonthNear,0))",
                 f.worstMonth(), "month", "WorstLoadMonth", Styles.GENERAL);
         Charts.monthlyEnergy(ctx, s, first, r + 1);
     }

@@ -275,21 +275,16 @@ public final class Sizing {
             dc[h] = loss.inputW(la.loadW()[h]);
             monthly[cal.month(h) - 1] += dc[h];
         }
-        int worst = 1;
         for (int m = 1; m <= 12; m++) {
             monthly[m - 1] /= cal.daysInMonth(m);
-            if (monthly[m - 1] > monthly[worst - 1]) {
-                worst = m;
-            }
         }
+        int worst = org.holdover.load.Picks.firstNearMax(monthly) + 1;
         if (in.mode() == ProjectInput.Mode.OFF_GRID) {
             double e = in.autonomyDays() * monthly[worst - 1];
             double ac = in.autonomyDays() * la.figures().monthlyDailyEnergyWh()[worst - 1];
             return new EnergyBasis(dc, monthly, worst, 0, new double[0], -1, e, in.autonomyDays() * 24.0, ac);
         }
         int window = Math.min(n, (int) Math.ceil(in.outageHours() - 1e-9));
-        double best = -1;
-        int bestStart = 0;
         double[] sums = new double[n - window + 1];
         for (int s = 0; s + window <= n; s++) {
             double sum = 0;
@@ -297,10 +292,11 @@ public final class Sizing {
                 sum += dc[h];
             }
             sums[s] = sum;
-            if (sum > best) {
-                best = sum;
-                bestStart = s;
-            }
+        }
+        int bestStart = org.holdover.load.Picks.firstNearMax(sums);
+        double best = 0;
+        for (double v : sums) {
+            best = Math.max(best, v);
         }
         double ac = 0;
         for (int h = bestStart; h < bestStart + window; h++) {

@@ -32,7 +32,13 @@ import org.junit.jupiter.api.TestInstance;
 @TestInstance(TestInstance.Lifecycle.PER_CLASS)
 class DemoWorkbooksTest {
 
-    static final List<String> DEMOS = List.of("examples/farm-shop-backup.yaml", "examples/ridge-cabin-offgrid.yaml");
+    /**
+     * The two demos, and the two starter projects of {@code holdover init}: their loads repeat day after day, so
+     * months and outage windows tie exactly, which is where a spreadsheet's own summation order could pick
+     * another month than the engine did.
+     */
+    static final List<String> DEMOS = List.of("examples/farm-shop-backup.yaml", "examples/ridge-cabin-offgrid.yaml",
+            "src/main/resources/org/holdover/cli/starter-backup.yaml", "src/main/resources/org/holdover/cli/starter-off-grid.yaml");
     private final List<Path> workbooks = new ArrayList<>();
 
     @BeforeAll
@@ -52,7 +58,7 @@ class DemoWorkbooksTest {
     void poiRecomputesEveryFormulaToTheEngineValue() {
         for (Path wb : workbooks) {
             RecalcReport report = PoiRecalc.recalculate(wb);
-            assertThat(report.cells()).as("formula cells in " + wb.getFileName()).hasSizeGreaterThan(50_000);
+            assertThat(report.cells()).as("formula cells in " + wb.getFileName()).hasSizeGreaterThan(40_000);
             System.out.println(report.summary(Tolerance.DEFAULT));
             report.assertAgrees(Tolerance.DEFAULT);
         }
@@ -78,7 +84,7 @@ class DemoWorkbooksTest {
     void summaryPrintsWithinThePageWidth() throws IOException {
         ExternalTools.requireOffice();
         ExternalTools.requirePdfTools();
-        for (Path wb : workbooks) {
+        for (Path wb : workbooks.subList(0, 2)) {
             PaperRender.SheetFit fit = PaperRender.measureFit(wb, "Summary");
             System.out.println(fit.describe());
             fit.assertFitsPageWidth(0.6);
