@@ -67,4 +67,26 @@ public record BankDesign(BatteryModule module, BankRequirement requirement, int 
     public double absorptionV() {
         return series * module.cells() * module.chemistry().cellAbsorptionV();
     }
+
+    /**
+     * The same design with another number of parallel strings (a system search's choice). It is within limits only
+     * with at least the strings the requirement asks for and at most the most allowed.
+     *
+     * @param n strings, at least 1
+     */
+    public BankDesign withStrings(int n) {
+        if (n < 1) {
+            throw new IllegalArgumentException("strings must be >= 1, got " + n);
+        }
+        if (n == strings) {
+            return this;
+        }
+        int needed = Math.max(stringsForEnergy, Math.max(stringsForContinuous, stringsForSurge));
+        boolean ok = n <= maxParallel && n >= needed && series > 0;
+        String why = n > maxParallel ? n + " parallel strings asked for, at most " + maxParallel + " allowed"
+                : n < needed ? n + " parallel strings, fewer than the " + needed + " the requirement asks for" : "";
+        return new BankDesign(module, requirement, series, bankNominalV, temperatureFactor, belowTable, agingFactor, effectiveAh,
+                dischargeA, rateFactor, ratedAh, stringsForEnergy, stringsForContinuous, stringsForSurge, n, maxParallel, ok,
+                ok ? "" : why);
+    }
 }

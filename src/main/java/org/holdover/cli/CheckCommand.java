@@ -20,9 +20,13 @@ final class CheckCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        SizingResult r = common.size();
-        ConsoleSummary.print(r, spec.commandLine().getOut(), spec.commandLine().getErr());
-        spec.commandLine().getOut().flush();
-        return r.passes() ? Main.OK : Main.FAILS_CHECKS;
+        try {
+            SizingResult r = common.size();
+            ConsoleSummary.print(r, spec.commandLine().getOut(), spec.commandLine().getErr());
+            spec.commandLine().getOut().flush();
+            return r.passes() ? Main.OK : Main.FAILS_CHECKS;
+        } finally {
+            common.done();
+        }
     }
 }

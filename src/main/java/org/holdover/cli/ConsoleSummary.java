@@ -36,6 +36,7 @@ final class ConsoleSummary {
             for (BusOption b : r.buses()) {
                 out.printf(Locale.ROOT, "    %4.0f V bus: %s%n", b.busClassV(), b.reason());
             }
+            search(r, out);
         } else {
             BankDesign b = r.bank();
             out.printf(Locale.ROOT, "  bus: %.0f V    inverter: %s (%s)%n", r.chosen().busClassV(), r.inverter().spec().id(),
@@ -61,6 +62,7 @@ final class ConsoleSummary {
                 out.println("  year: " + r.year().comparison(r.bank()));
                 out.println("  " + r.year().life());
             }
+            search(r, out);
             for (Check c : r.advisories()) {
                 if (!c.passes()) {
                     out.printf(Locale.ROOT, "  limit to look at: %s %s %s %s %s %s (%s)%n", c.label(), num(c.value()),
@@ -69,6 +71,36 @@ final class ConsoleSummary {
             }
         }
         out.println(Cautions.SHORT);
+    }
+
+    private static void search(SizingResult r, PrintWriter out) {
+        org.holdover.sizing.SearchResult s = r.search();
+        if (s == null) {
+            return;
+        }
+        var st = s.stats();
+        out.printf(Locale.ROOT, "  search: %,d component checks, %,d systems passing them, %,d simulated years, %,d skipped"
+                        + " (a larger system of the family failed)%s%n", st.cheapChecks(), st.candidates(), st.simulated(),
+                st.pruned(), st.stoppedEarly() ? "; STOPPED EARLY: the best system found so far" : "");
+        if (s.chosen() != null) {
+            out.printf(Locale.ROOT, "    chosen  %,9.0f  %s%n", s.chosen().candidate().cost(), s.chosen().candidate().describe());
+        }
+        for (var a : s.alternatives()) {
+            out.printf(Locale.ROOT, "    next    %,9.0f  %s%n", a.candidate().cost(), a.candidate().describe());
+        }
+        int shown = 0;
+        for (var j : s.rejected()) {
+            if (shown++ == 6) {
+                out.printf(Locale.ROOT, "    … %d more families left out (the workbook's Alternatives sheet lists them all)%n",
+                        s.rejected().size() - 6);
+                break;
+            }
+            out.printf(Locale.ROOT, "    left out %s: %s%n", j.family(), j.reason());
+        }
+        for (var c : s.sensitivity()) {
+            out.printf(Locale.ROOT, "    %s %.0f %%: %s — %s%n", c.label().toLowerCase(Locale.ROOT), c.changePct(),
+                    c.passes() ? "still passes" : "FAILS", c.detail());
+        }
     }
 
     private static final String[] MONTHS = {"January", "February", "March", "April", "May", "June", "July", "August",

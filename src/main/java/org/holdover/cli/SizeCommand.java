@@ -33,20 +33,24 @@ final class SizeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        SizingResult r = common.size();
-        Path target = output != null ? output : defaultOutput(common.project);
-        PrintWriter out = spec.commandLine().getOut();
         try {
-            WorkbookWriter.write(r, target, force);
-        } catch (WorkbookWriter.TargetExistsException e) {
-            throw new Main.UserError(target + " already exists; add --force to replace it, or -o to write elsewhere");
-        } catch (IOException e) {
-            throw new Main.UserError("cannot write " + target + ": " + e.getMessage());
+            SizingResult r = common.size();
+            Path target = output != null ? output : defaultOutput(common.project);
+            PrintWriter out = spec.commandLine().getOut();
+            try {
+                WorkbookWriter.write(r, target, force);
+            } catch (WorkbookWriter.TargetExistsException e) {
+                throw new Main.UserError(target + " already exists; add --force to replace it, or -o to write elsewhere");
+            } catch (IOException e) {
+                throw new Main.UserError("cannot write " + target + ": " + e.getMessage());
+            }
+            ConsoleSummary.print(r, out, spec.commandLine().getErr());
+            out.println("Workbook: " + target);
+            out.flush();
+            return r.passes() ? Main.OK : Main.FAILS_CHECKS;
+        } finally {
+            common.done();
         }
-        ConsoleSummary.print(r, out, spec.commandLine().getErr());
-        out.println("Workbook: " + target);
-        out.flush();
-        return r.passes() ? Main.OK : Main.FAILS_CHECKS;
     }
 
     static Path defaultOutput(Path project) {

@@ -200,9 +200,13 @@ public record ProjectInput(
      * @param maxParallelStrings     cap on parallel battery strings (null: chemistry default)
      * @param busVoltageV            consider only this DC bus voltage class, V (null: choose)
      * @param maxUnmetPct            unmet energy the simulated year may leave, % of the served energy (default 0)
+     * @param alternatives           next best systems the search shows (default 3)
+     * @param loadGrowthPct          load growth the chosen system is tried against, % (default 10)
+     * @param poorerSolarPct         shortfall of the solar resource the chosen system is tried against, % (default 10)
      */
     public record RulesInput(Double inverterMargin, Double maxBatteryCurrentA, Integer motorsStartingTogether,
-                             Integer maxParallelStrings, Double busVoltageV, Double maxUnmetPct) {
+                             Integer maxParallelStrings, Double busVoltageV, Double maxUnmetPct, Integer alternatives,
+                             Double loadGrowthPct, Double poorerSolarPct) {
     }
 
     /**

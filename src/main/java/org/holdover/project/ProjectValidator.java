@@ -124,6 +124,11 @@ public final class ProjectValidator {
             }
             rangeOpenLow("rules.busVoltageV", p.rules().busVoltageV(), 0, 1500, "V");
             range("rules.maxUnmetPct", p.rules().maxUnmetPct(), 0, 50, "%");
+            if (p.rules().alternatives() != null && (p.rules().alternatives() < 0 || p.rules().alternatives() > 20)) {
+                error("rules.alternatives", "must be 0–20, got " + p.rules().alternatives(), "");
+            }
+            range("rules.loadGrowthPct", p.rules().loadGrowthPct(), 0, 200, "%");
+            range("rules.poorerSolarPct", p.rules().poorerSolarPct(), 0, 90, "%");
             if (p.rules().maxParallelStrings() != null && (p.rules().maxParallelStrings() < 1 || p.rules().maxParallelStrings() > 64)) {
                 error("rules.maxParallelStrings", "must be 1–64, got " + p.rules().maxParallelStrings(), "");
             }

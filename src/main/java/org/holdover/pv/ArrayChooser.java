@@ -123,6 +123,17 @@ public final class ArrayChooser {
                 : candidate(m, c, n, Math.min(1000, totalStrings), 1, in);
     }
 
+    /**
+     * One fixed layout (a system search's choice): {@code n} modules per string, {@code strings} strings on each of
+     * {@code k} controllers, with every check against the input's conditions and required power.
+     */
+    public static ArrayCandidate fixed(PvModule m, ChargeController c, int n, int strings, int k, Input in) {
+        if (n < 1 || strings < 1 || k < 1) {
+            throw new IllegalArgumentException("modules per string, strings and controllers must be >= 1");
+        }
+        return candidate(m, c, n, strings, k, in);
+    }
+
     private static ArrayCandidate candidate(PvModule m, ChargeController c, int n, int strings, int k, Input in) {
         ArrayCheckReport r = ArrayChecks.evaluate(new PvArray(m, n, strings), c, in.conditions());
         double effective = r.array().stcPowerW() * k * r.pwmPowerRatio();

@@ -107,6 +107,12 @@ final class BatterySheet {
         s.text(r, 0, "Lowest DC for the AC peak (transformerless bridge: √2 × V rms ÷ modulation index), V");
         s.formula(r, 2, "IF(InvTopology=\"transformerless-direct\",SQRT(2)*ServiceV/InvModIndex,0)", inv.minDcForAcPeakV(), Styles.D1);
         s.name("MinDcForPeakV", r++, 2);
+        var pin = ctx.r.search() == null || ctx.r.search().chosen() == null ? null : ctx.r.search().chosen().candidate().pin();
+        s.text(r, 0, "The system search's choice: module; strings (the table takes at least these for that module)");
+        s.inputText(r, 2, pin == null ? "" : pin.batteryModuleId());
+        s.input(r, 3, pin == null ? 0 : pin.strings(), Styles.INT);
+        s.name("SearchModule", r, 2);
+        s.name("SearchStrings", r++, 3);
 
         r++;
         s.header(r++, 0, "Module", "Chemistry", "Module V", "Ah", "Rated at h", "Continuous A", "Surge A", "Surge s",
@@ -149,7 +155,8 @@ final class BatterySheet {
             s.formula(r, S_ENERGY, "MAX(1,ROUNDUP(W" + R + "/D" + R + "-RoundingSlack,0))", b.stringsForEnergy(), Styles.INT);
             s.formula(r, S_CONT, "MAX(0,ROUNDUP(ContA/F" + R + "-RoundingSlack,0))", b.stringsForContinuous(), Styles.INT);
             s.formula(r, S_SURGE, "MAX(0,ROUNDUP(SurgeA/IF(StartS<=H" + R + ",G" + R + ",F" + R + ")-RoundingSlack,0))", b.stringsForSurge(), Styles.INT);
-            s.formula(r, STRINGS, "MAX(X" + R + ",Y" + R + ",Z" + R + ")", b.strings(), Styles.INT);
+            s.formula(r, STRINGS, "MAX(X" + R + ",Y" + R + ",Z" + R + ",IF(A" + R + "=SearchModule,SearchStrings,0))", b.strings(),
+                    Styles.INT);
             s.formula(r, PAR_LIMIT, "MIN(I" + R + ",IF(MaxParallelRule>0,MaxParallelRule,INDEX(ChemMaxPar," + chem + ")))",
                     b.maxParallel(), Styles.INT);
             s.formulaText(r, FEASIBLE, "IF(AA" + R + "<=AB" + R + ",\"yes\",\"no\")", b.feasible() ? "yes" : "no");
@@ -165,7 +172,9 @@ final class BatterySheet {
                     suits ? "yes" : "no");
             s.formulaText(r, USE, "IF(AND(AC" + R + "=\"yes\",AI" + R + "=\"yes\"),\"yes\",\"no\")", o.usable() ? "yes" : "no");
             boolean chosen = b == ctx.r.bank();
-            s.text(r, CHOSEN, chosen ? "chosen (lowest demo price that is usable)" : o.reason());
+            s.text(r, CHOSEN, chosen ? (ctx.r.search() != null && ctx.r.search().chosen() != null
+                    ? "chosen (the system search's least-cost passing system)" : "chosen (lowest demo price that is usable)")
+                    : o.reason());
             if (chosen) {
                 chosenRow = r;
             }

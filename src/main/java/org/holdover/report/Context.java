@@ -29,9 +29,10 @@ final class Context {
     static final String TABLES = "Tables";
     static final String CONDUCTORS = "Conductor tables";
     static final String CAUTIONS = "Cautions";
+    static final String ALTERNATIVES = "Alternatives";
 
-    static final List<String> ORDER = List.of(SUMMARY, LOADS, MOTORS, DAYS, INVERTERS, CURVES, BUS, BATTERY, PV, WIRING, HOURLY,
-            PV_HOURLY, SIMULATION, MONTHLY, INPUTS, TABLES, CONDUCTORS, CAUTIONS);
+    static final List<String> ORDER = List.of(SUMMARY, LOADS, MOTORS, DAYS, INVERTERS, CURVES, BUS, BATTERY, PV, WIRING, ALTERNATIVES,
+            HOURLY, PV_HOURLY, SIMULATION, MONTHLY, INPUTS, TABLES, CONDUCTORS, CAUTIONS);
 
     final SXSSFWorkbook wb;
     final Styles styles;

@@ -390,9 +390,13 @@ final class PvSheet {
         s.formula(r, VALUE, "PvModW*PvPerString*PvPowerRatio", effString, Styles.D1);
         s.text(r, UNIT, "W");
         s.name("PvStringW", r++, VALUE);
+        var pin = ctx.r.search() == null || ctx.r.search().chosen() == null ? null : ctx.r.search().chosen().candidate().pin().pv();
+        int searchStrings = pin == null ? 0 : pin.totalStrings();
+        r = input(s, r, "Strings the system search chose in all (0: the sizing's own)", "PvSearchStrings", searchStrings, "",
+                Styles.INT, "from the Alternatives sheet: more strings than the sizing needs when they make the cheapest passing system");
         s.text(r, LABEL, "Strings needed in all");
-        s.formula(r, VALUE, "MAX(1,-INT(-(PvRequiredW/PvStringW-1E-9)))", ArrayChooser.stringsNeeded(o.requiredStcW(), effString),
-                Styles.INT);
+        s.formula(r, VALUE, "MAX(1,-INT(-(PvRequiredW/PvStringW-1E-9)),PvSearchStrings)",
+                Math.max(ArrayChooser.stringsNeeded(o.requiredStcW(), effString), searchStrings), Styles.INT);
         s.name("PvStringsNeeded", r++, VALUE);
         s.text(r, LABEL, "Strings on each controller");
         s.formula(r, VALUE, "-INT(-PvStringsNeeded/PvCtls)", c.stringsPerController(), Styles.INT);

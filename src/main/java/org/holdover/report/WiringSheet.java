@@ -60,112 +60,11 @@ final class WiringSheet {
         r = f(s, r, "Inverter low-voltage cutoff", "InvDcMinV", inv.dcMinV(), "V", "catalog", Styles.D1, "W_CutoffV");
         r = f(s, r, "Continuous current of the circuit", "W_DcInW/W_CutoffV", dc.cableCurrentA(), "A",
                 "the inverter's rated input at its cutoff (the most it can draw continuously)", Styles.D1, "W_ContA");
-        r = in(s, r, "Design factor for continuous current", cable.request().factors().designFactor(), "×",
-                nec ? "NEC 2023 210.19(A)(1)(a), 215.2(A)(1): 125 %" : "IEC 60364-4-43: Ib ≤ In ≤ Iz (no factor); holdover keeps 125 %",
-                Styles.D2, "W_DesignFactor");
-        r = f(s, r, "Design current", "W_ContA*W_DesignFactor", a.designCurrentA(), "A", "", Styles.D1, "W_DesignA");
-        if (nec) {
-            r = in(s, r, "Factor for conditions of use", cable.request().factors().conditionsOfUseFactor(), "×",
-                    "NEC 2023 210.19(A)(1)(b): the corrected ampacity must carry the load itself", Styles.D2, "W_CouFactor");
-            r = f(s, r, "Current the corrected ampacity must carry", "W_ContA*W_CouFactor", a.conditionsOfUseCurrentA(), "A", "",
-                    Styles.D1, "W_CouA");
-        } else {
-            r = f(s, r, "Current the corrected capacity must carry (Ib)", "W_DesignA", a.conditionsOfUseCurrentA(), "A",
-                    "IEC 60364-5-52: Iz ≥ Ib", Styles.D1, "W_CouA");
-        }
-        r = in(s, r, "One-way length", cable.request().oneWayLengthM(), "m", "project", Styles.D2, "W_LengthM");
-        r = in(s, r, "Voltage-drop limit", cable.request().maxVoltageDropPct(), "%", "project", Styles.D2, "W_DropLimitPct");
-        r = in(s, r, "Ambient around the conductors", cable.request().installation().ambientC(), "°C", "project", Styles.D1, "W_AmbientC");
-        r = in(s, r, "Current-carrying conductors together", cable.request().installation().currentCarryingConductors(), "",
-                "a two-wire DC circuit", Styles.INT, "W_Conductors");
-        r = f(s, r, "Nominal bank voltage (drop is a % of it)", bat.ref(bankRow, BatterySheet.BANK_V), bank.bankNominalV(), "V",
-                "Battery sheet", Styles.D1, "W_NominalV");
-        r = in(s, r, "Insulation temperature rating", cable.request().installation().insulationTempC(), "°C",
-                nec ? "75 °C wire and terminals (common)" : "XLPE/EPR, 90 °C", Styles.INT, "W_InsulC");
-        r = in(s, r, "Terminal temperature rating", cable.request().installation().terminalTempC(), "°C",
-                nec ? "NEC 2023 110.14(C): take ampacity at the lower of insulation and terminal ratings" : "", Styles.INT, "W_TerminalC");
-        s.text(r, 0, "Conductor chosen (smallest that passes; governed by " + cable.governing().name().toLowerCase(Locale.ROOT).replace('_', ' ') + ")");
-        if (nec) {
-            s.inputText(r, V, ch.size().label());
-        } else {
-            s.input(r, V, ch.size().areaMm2(), Styles.GENERAL);
-        }
-        s.text(r, 2, nec ? "" : "mm²");
-        s.text(r, 3, "the engine's choice; the rows below check it against the tables");
-        s.name("W_Size", r++, V);
-        r = in(s, r, "Conductors in parallel per pole", ch.parallelSets(), "", nec ? "NEC 2023 310.10(G): 1/0 AWG and larger only" : "",
-                Styles.INT, "W_Sets");
-        String size = "W_Size";
-        if (nec) {
-            String match = "MATCH(" + size + ",NecAmp_size,0)";
-            String col = "IF(%s=60,INDEX(NecAmp_copper_60c_a," + match + "),IF(%s=75,INDEX(NecAmp_copper_75c_a," + match
-                    + "),INDEX(NecAmp_copper_90c_a," + match + ")))";
-            r = f(s, r, "Table 310.16 ampacity, insulation column", String.format(col, "W_InsulC", "W_InsulC"), a.tableAmpacityA(),
-                    "A", "INDEX/MATCH into NEC 2023 Table 310.16", Styles.INT, "W_TableA");
-            r = f(s, r, "Table 310.16 ampacity, terminal column", String.format(col, "W_TerminalC", "W_TerminalC"),
-                    a.terminalAmpacityA(), "A", "", Styles.INT, "W_TerminalA");
-            String amb = "MATCH(ROUNDUP(W_AmbientC,0),NecAmb_ambient_from_c,1)";
-            r = f(s, r, "Ambient correction factor", "IF(W_InsulC=60,INDEX(NecAmb_factor_60c," + amb + "),IF(W_InsulC=75,INDEX(NecAmb_factor_75c,"
-                    + amb + "),INDEX(NecAmb_factor_90c," + amb + ")))", a.ambientFactor(), "", "NEC 2023 Table 310.15(B)(1)(1), base 30 °C",
-                    Styles.D2, "W_AmbFactor");
-            r = f(s, r, "Adjustment for more than three conductors", "INDEX(NecAdj_factor,MATCH(W_Conductors,NecAdj_conductors_from,1))",
-                    a.adjustmentFactor(), "", "NEC 2023 Table 310.15(C)(1)", Styles.D2, "W_AdjFactor");
-            r = f(s, r, "Corrected ampacity", "W_Sets*W_TableA*W_AmbFactor*W_AdjFactor", a.correctedAmpacityA(), "A",
-                    "sets × table × ambient × adjustment", Styles.D1, "W_CorrectedA");
-            r = f(s, r, "Ampacity at the terminal rating (uncorrected)", "W_Sets*MIN(W_TableA,W_TerminalA)", a.uncorrectedLimitA(), "A",
-                    "", Styles.D1, "W_TerminalLimitA");
-        } else {
-            String match = "MATCH(" + size + ",IecCap_area_mm2,0)";
-            r = f(s, r, "Current-carrying capacity, method C", "IF(W_InsulC=70,INDEX(IecCap_pvc_70c_a," + match + "),INDEX(IecCap_xlpe_90c_a,"
-                    + match + "))", a.tableAmpacityA(), "A", "IEC 60364-5-52 Table B.52.2/B.52.3, method C", Styles.INT, "W_TableA");
-            String k = "IFERROR(MATCH(W_AmbientC,IecAmb_ambient_c,1),0)";
-            String idx = "IF(" + k + "=0,1," + k + "+IF(INDEX(IecAmb_ambient_c," + k + ")<W_AmbientC,1,0))";
-            r = f(s, r, "Ambient correction factor", "IF(W_InsulC=70,INDEX(IecAmb_pvc_70c," + idx + "),INDEX(IecAmb_xlpe_90c," + idx + "))",
-                    a.ambientFactor(), "", "IEC 60364-5-52 Table B.52.14 (next warmer row)", Styles.D2, "W_AmbFactor");
-            String circuits = "ROUNDUP(W_Conductors/2,0)";
-            String g = "MATCH(" + circuits + ",IecGrp_circuits,1)";
-            r = f(s, r, "Grouping factor", "INDEX(IecGrp_factor," + g + "+IF(INDEX(IecGrp_circuits," + g + ")<" + circuits + ",1,0))",
-                    a.adjustmentFactor(), "", "IEC 60364-5-52 Table B.52.17", Styles.D2, "W_AdjFactor");
-            r = f(s, r, "Corrected capacity Iz", "W_Sets*W_TableA*W_AmbFactor*W_AdjFactor", a.correctedAmpacityA(), "A", "", Styles.D1,
-                    "W_CorrectedA");
-            r = f(s, r, "Capacity Iz (no separate terminal limit)", "W_CorrectedA", a.uncorrectedLimitA(), "A", "", Styles.D1,
-                    "W_TerminalLimitA");
-        }
-        r = f(s, r, "Allowable ampacity", "MIN(W_CorrectedA,W_TerminalLimitA)", a.allowableAmpacityA(), "A", "the smaller of the two",
-                Styles.D1, "W_AllowableA");
+        r = conductor(ctx, s, r, "W_", cable, "Nominal bank voltage (drop is a % of it)", bat.ref(bankRow, BatterySheet.BANK_V),
+                bank.bankNominalV(), "Battery sheet");
         boolean fine = cable.request().fineStranded();
-        String resistance = nec ? "INDEX(NecRes_uncoated_stranded_ohm_per_kft,MATCH(W_Size,NecRes_size,0))*(1/304.8)"
-                : "INDEX(" + (fine ? "IecRes_class5_plain_ohm_per_km" : "IecRes_class2_plain_ohm_per_km")
-                        + ",MATCH(W_Size,IecRes_area_mm2,0))/1000";
-        r = f(s, r, "Resistance at the table temperature", resistance, vd.resistanceOhmPerM()
-                / ConductorTables.temperatureRatio(ch.size().system(), vd.conductorTempC()), "Ω/m",
-                nec ? "NEC 2023 Chapter 9 Table 8, stranded copper, 75 °C (Ω/kft ÷ 304.8)" : "IEC 60228 class " + (fine ? 5 : 2) + ", 20 °C",
-                "0.000000", "W_RefOhmPerM");
-        r = in(s, r, "Conductor temperature for the drop", vd.conductorTempC(), "°C", "its insulation rating: a conductor at full load runs that hot",
-                Styles.D1, "W_CondTempC");
         double alpha = ConductorTables.alpha20PerC(ch.size().system());
         double ref = ConductorTables.referenceTemperatureC(ch.size().system());
-        r = f(s, r, "Resistance at that temperature", "W_RefOhmPerM*((1+" + alpha + "*(W_CondTempC-20))/(1+" + alpha + "*(" + ref + "-20)))",
-                vd.resistanceOhmPerM(), "Ω/m", "α20 = " + alpha + " per °C" + (nec ? " (copper; NEC Table 8 note)" : " (IEC 60228 Annex B)"),
-                "0.000000", "W_OhmPerM");
-        r = f(s, r, "Round-trip resistance", "2*W_LengthM*W_OhmPerM/W_Sets", vd.roundTripResistanceOhm(), "Ω", "out and back",
-                "0.000000", "W_CableOhm");
-        r = f(s, r, "Voltage drop at the continuous current", "W_ContA*W_CableOhm", vd.dropV(), "V", "", Styles.D3, "W_DropV");
-        r = f(s, r, "Voltage drop", "100*W_DropV/W_NominalV", vd.dropPct(), "%", "", Styles.D2, "W_DropPct");
-        String dev = nec ? "NecDev_A" : "IecDev_rating_a";
-        String next = "IFERROR(IF(INDEX(" + dev + ",MATCH(%1$s-RoundingSlack," + dev + ",1))>=%1$s-RoundingSlack,INDEX(" + dev
-                + ",MATCH(%1$s-RoundingSlack," + dev + ",1)),INDEX(" + dev + ",MATCH(%1$s-RoundingSlack," + dev + ",1)+1)),INDEX(" + dev + ",1))";
-        r = f(s, r, "Overcurrent device rating", String.format(next, "W_DesignA"), cable.device().ratingA(), "A",
-                nec ? "next standard rating at or above the design current, NEC 2023 240.6(A)" : "next rating at or above Ib (IEC ratings from memory)",
-                Styles.INT, "W_DeviceA");
-        String limit = nec ? "IF(W_DeviceA<=W_AllowableA+RoundingSlack,W_AllowableA,IF(AND(W_DeviceA<=800,COUNTIF(NecDev_A,W_AllowableA)=0,W_DeviceA="
-                + String.format(next, "W_AllowableA") + "),W_DeviceA,W_AllowableA))" : "W_AllowableA";
-        r = f(s, r, "Largest rating that protects the conductor", limit,
-                org.holdover.sizing.Sizing.deviceLimit(cable.device()), "A",
-                nec ? "the allowable ampacity, or the next standard rating above it (240.4(B), up to 800 A)" : "Iz", Styles.D1, "W_DeviceLimitA");
-        for (String note : cable.notes()) {
-            r = s.paragraph(r, 0, 3, note, ctx.styles.noteWrap, 150);
-        }
 
         r++;
         s.text(r++, 0, "Battery voltage at the inverter while the motors start (worst case the design allows)", ctx.styles.subtitle);
@@ -280,6 +179,35 @@ final class WiringSheet {
                 + (long) ShortCircuit.COMMON_ORDINARY_DEVICE_LIMIT_A + " A (common practice, no source): check the device's DC interrupting rating.",
                 ctx.styles.noteWrap, 150);
 
+        org.holdover.sizing.PvCircuits pvc = ctx.r.pvCircuits();
+        if (pvc != null && pvc.pvOutput() instanceof ConductorSelection.Sized pvo
+                && pvc.controllerOutput() instanceof ConductorSelection.Sized cto) {
+            org.holdover.pv.ArrayCandidate cand = ctx.r.solar().chosen().candidate();
+            r++;
+            s.text(r++, 0, "PV output circuit, array to each of the " + pvc.controllers() + " controller(s) (NEC 690.8)", ctx.styles.subtitle);
+            s.header(r++, 0, "Quantity", "Value", "Unit", "How");
+            r = in(s, r, "Module short-circuit current", cand.module().stc().iscA(), "A", "catalog", Styles.D2, "PVO_Isc");
+            r = in(s, r, "Strings on each controller", cand.stringsPerController(), "", "PV sheet", Styles.INT, "PVO_Strings");
+            r = f(s, r, "Continuous current (the sub-array's short-circuit current)", "PVO_Isc*PVO_Strings", pvo.request().continuousCurrentA(),
+                    "A", "NEC 690.8(A)(1) then (B): × 1.25 × 1.25 below", Styles.D2, "PVO_ContA");
+            r = in(s, r, "Module maximum-power voltage", cand.module().stc().vmpV(), "V", "catalog", Styles.D2, "PVO_Vmp");
+            r = in(s, r, "Modules per string", cand.modulesPerString(), "", "PV sheet", Styles.INT, "PVO_PerString");
+            r = conductor(ctx, s, r, "PVO_", pvo, "String maximum-power voltage (drop is a % of it)", "PVO_Vmp*PVO_PerString",
+                    pvo.request().nominalV(), "modules per string × Vmp");
+            r++;
+            s.text(r++, 0, "Controller output circuit, each controller to the battery", ctx.styles.subtitle);
+            s.header(r++, 0, "Quantity", "Value", "Unit", "How");
+            r = in(s, r, "Controller rated output current", cto.request().continuousCurrentA(), "A",
+                    "catalog; NEC 690.8(A)(3) (from memory): the controller's rated output current", Styles.D1, "CTO_ContA");
+            r = conductor(ctx, s, r, "CTO_", cto, "Nominal bank voltage (drop is a % of it)", bat.ref(bankRow, BatterySheet.BANK_V),
+                    cto.request().nominalV(), "Battery sheet");
+            for (String[] k : new String[][] {{"pvc.pv", "PVO_"}, {"pvc.out", "CTO_"}}) {
+                ctx.checkCells.put(k[0] + ".ampacity", new String[] {k[1] + "AllowableA", "MAX(" + k[1] + "DesignA," + k[1] + "CouA)"});
+                ctx.checkCells.put(k[0] + ".drop", new String[] {k[1] + "DropPct", k[1] + "DropLimitPct"});
+                ctx.checkCells.put(k[0] + ".fuse", new String[] {k[1] + "DeviceA", k[1] + "DesignA"});
+            }
+        }
+
         r++;
         s.text(r++, 0, "Cautions for the DC wiring", ctx.styles.subtitle);
         for (String c : new String[] {
@@ -292,6 +220,121 @@ final class WiringSheet {
     }
 
 
+
+    /** One DC circuit's conductor and device checked against the tables; its cells are named {@code P + …}. */
+    static int conductor(Context ctx, SheetWriter s, int r, String P, ConductorSelection.Sized cable, String nominalLabel,
+                         String nominalFormula, double nominalV, String nominalHow) {
+        CandidateEvaluation ch = cable.chosen();
+        AmpacityStep a = ch.ampacity();
+        VoltageDropStep vd = ch.voltageDrop();
+        boolean nec = ch.size().system() == TableSystem.NEC;
+        r = in(s, r, "Design factor for continuous current", cable.request().factors().designFactor(), "×",
+                nec ? "NEC 2023 210.19(A)(1)(a), 215.2(A)(1): 125 %" : "IEC 60364-4-43: Ib ≤ In ≤ Iz (no factor); holdover keeps 125 %",
+                Styles.D2, P + "DesignFactor");
+        r = f(s, r, "Design current", P + "ContA" + "*" + P + "DesignFactor", a.designCurrentA(), "A", "", Styles.D1, P + "DesignA");
+        if (nec) {
+            r = in(s, r, "Factor for conditions of use", cable.request().factors().conditionsOfUseFactor(), "×",
+                    "NEC 2023 210.19(A)(1)(b): the corrected ampacity must carry the load itself", Styles.D2, P + "CouFactor");
+            r = f(s, r, "Current the corrected ampacity must carry", P + "ContA" + "*" + P + "CouFactor", a.conditionsOfUseCurrentA(), "A", "",
+                    Styles.D1, P + "CouA");
+        } else {
+            r = f(s, r, "Current the corrected capacity must carry (Ib)", P + "DesignA", a.conditionsOfUseCurrentA(), "A",
+                    "IEC 60364-5-52: Iz ≥ Ib", Styles.D1, P + "CouA");
+        }
+        r = in(s, r, "One-way length", cable.request().oneWayLengthM(), "m", "project", Styles.D2, P + "LengthM");
+        r = in(s, r, "Voltage-drop limit", cable.request().maxVoltageDropPct(), "%", "project", Styles.D2, P + "DropLimitPct");
+        r = in(s, r, "Ambient around the conductors", cable.request().installation().ambientC(), "°C", "project", Styles.D1, P + "AmbientC");
+        r = in(s, r, "Current-carrying conductors together", cable.request().installation().currentCarryingConductors(), "",
+                "a two-wire DC circuit", Styles.INT, P + "Conductors");
+        r = f(s, r, nominalLabel, nominalFormula, nominalV, "V", nominalHow, Styles.D1, P + "NominalV");
+        r = in(s, r, "Insulation temperature rating", cable.request().installation().insulationTempC(), "°C",
+                nec ? "75 °C wire and terminals (common)" : "XLPE/EPR, 90 °C", Styles.INT, P + "InsulC");
+        r = in(s, r, "Terminal temperature rating", cable.request().installation().terminalTempC(), "°C",
+                nec ? "NEC 2023 110.14(C): take ampacity at the lower of insulation and terminal ratings" : "", Styles.INT, P + "TerminalC");
+        s.text(r, 0, "Conductor chosen (smallest that passes; governed by " + cable.governing().name().toLowerCase(Locale.ROOT).replace('_', ' ') + ")");
+        if (nec) {
+            s.inputText(r, V, ch.size().label());
+        } else {
+            s.input(r, V, ch.size().areaMm2(), Styles.GENERAL);
+        }
+        s.text(r, 2, nec ? "" : "mm²");
+        s.text(r, 3, "the engine's choice; the rows below check it against the tables");
+        s.name(P + "Size", r++, V);
+        r = in(s, r, "Conductors in parallel per pole", ch.parallelSets(), "", nec ? "NEC 2023 310.10(G): 1/0 AWG and larger only" : "",
+                Styles.INT, P + "Sets");
+        String size = P + "Size";
+        if (nec) {
+            String match = "MATCH(" + size + ",NecAmp_size,0)";
+            String col = "IF(%s=60,INDEX(NecAmp_copper_60c_a," + match + "),IF(%s=75,INDEX(NecAmp_copper_75c_a," + match
+                    + "),INDEX(NecAmp_copper_90c_a," + match + ")))";
+            r = f(s, r, "Table 310.16 ampacity, insulation column", String.format(col, P + "InsulC", P + "InsulC"), a.tableAmpacityA(),
+                    "A", "INDEX/MATCH into NEC 2023 Table 310.16", Styles.INT, P + "TableA");
+            r = f(s, r, "Table 310.16 ampacity, terminal column", String.format(col, P + "TerminalC", P + "TerminalC"),
+                    a.terminalAmpacityA(), "A", "", Styles.INT, P + "TerminalA");
+            String amb = "MATCH(ROUNDUP(" + P + "AmbientC" + ",0),NecAmb_ambient_from_c,1)";
+            r = f(s, r, "Ambient correction factor", "IF(" + P + "InsulC" + "=60,INDEX(NecAmb_factor_60c," + amb + "),IF(" + P + "InsulC" + "=75,INDEX(NecAmb_factor_75c,"
+                    + amb + "),INDEX(NecAmb_factor_90c," + amb + ")))", a.ambientFactor(), "", "NEC 2023 Table 310.15(B)(1)(1), base 30 °C",
+                    Styles.D2, P + "AmbFactor");
+            r = f(s, r, "Adjustment for more than three conductors", "INDEX(NecAdj_factor,MATCH(" + P + "Conductors" + ",NecAdj_conductors_from,1))",
+                    a.adjustmentFactor(), "", "NEC 2023 Table 310.15(C)(1)", Styles.D2, P + "AdjFactor");
+            r = f(s, r, "Corrected ampacity", P + "Sets" + "*" + P + "TableA" + "*" + P + "AmbFactor" + "*" + P + "AdjFactor", a.correctedAmpacityA(), "A",
+                    "sets × table × ambient × adjustment", Styles.D1, P + "CorrectedA");
+            r = f(s, r, "Ampacity at the terminal rating (uncorrected)", P + "Sets" + "*MIN(" + P + "TableA" + "," + P + "TerminalA" + ")", a.uncorrectedLimitA(), "A",
+                    "", Styles.D1, P + "TerminalLimitA");
+        } else {
+            String match = "MATCH(" + size + ",IecCap_area_mm2,0)";
+            r = f(s, r, "Current-carrying capacity, method C", "IF(" + P + "InsulC" + "=70,INDEX(IecCap_pvc_70c_a," + match + "),INDEX(IecCap_xlpe_90c_a,"
+                    + match + "))", a.tableAmpacityA(), "A", "IEC 60364-5-52 Table B.52.2/B.52.3, method C", Styles.INT, P + "TableA");
+            String k = "IFERROR(MATCH(" + P + "AmbientC" + ",IecAmb_ambient_c,1),0)";
+            String idx = "IF(" + k + "=0,1," + k + "+IF(INDEX(IecAmb_ambient_c," + k + ")<" + P + "AmbientC" + ",1,0))";
+            r = f(s, r, "Ambient correction factor", "IF(" + P + "InsulC" + "=70,INDEX(IecAmb_pvc_70c," + idx + "),INDEX(IecAmb_xlpe_90c," + idx + "))",
+                    a.ambientFactor(), "", "IEC 60364-5-52 Table B.52.14 (next warmer row)", Styles.D2, P + "AmbFactor");
+            String circuits = "ROUNDUP(" + P + "Conductors" + "/2,0)";
+            String g = "MATCH(" + circuits + ",IecGrp_circuits,1)";
+            r = f(s, r, "Grouping factor", "INDEX(IecGrp_factor," + g + "+IF(INDEX(IecGrp_circuits," + g + ")<" + circuits + ",1,0))",
+                    a.adjustmentFactor(), "", "IEC 60364-5-52 Table B.52.17", Styles.D2, P + "AdjFactor");
+            r = f(s, r, "Corrected capacity Iz", P + "Sets" + "*" + P + "TableA" + "*" + P + "AmbFactor" + "*" + P + "AdjFactor", a.correctedAmpacityA(), "A", "", Styles.D1,
+                    P + "CorrectedA");
+            r = f(s, r, "Capacity Iz (no separate terminal limit)", P + "CorrectedA", a.uncorrectedLimitA(), "A", "", Styles.D1,
+                    P + "TerminalLimitA");
+        }
+        r = f(s, r, "Allowable ampacity", "MIN(" + P + "CorrectedA" + "," + P + "TerminalLimitA" + ")", a.allowableAmpacityA(), "A", "the smaller of the two",
+                Styles.D1, P + "AllowableA");
+        boolean fine = cable.request().fineStranded();
+        String resistance = nec ? "INDEX(NecRes_uncoated_stranded_ohm_per_kft,MATCH(" + P + "Size" + ",NecRes_size,0))*(1/304.8)"
+                : "INDEX(" + (fine ? "IecRes_class5_plain_ohm_per_km" : "IecRes_class2_plain_ohm_per_km")
+                        + ",MATCH(" + P + "Size" + ",IecRes_area_mm2,0))/1000";
+        r = f(s, r, "Resistance at the table temperature", resistance, vd.resistanceOhmPerM()
+                / ConductorTables.temperatureRatio(ch.size().system(), vd.conductorTempC()), "Ω/m",
+                nec ? "NEC 2023 Chapter 9 Table 8, stranded copper, 75 °C (Ω/kft ÷ 304.8)" : "IEC 60228 class " + (fine ? 5 : 2) + ", 20 °C",
+                "0.000000", P + "RefOhmPerM");
+        r = in(s, r, "Conductor temperature for the drop", vd.conductorTempC(), "°C", "its insulation rating: a conductor at full load runs that hot",
+                Styles.D1, P + "CondTempC");
+        double alpha = ConductorTables.alpha20PerC(ch.size().system());
+        double ref = ConductorTables.referenceTemperatureC(ch.size().system());
+        r = f(s, r, "Resistance at that temperature", P + "RefOhmPerM" + "*((1+" + alpha + "*(" + P + "CondTempC" + "-20))/(1+" + alpha + "*(" + ref + "-20)))",
+                vd.resistanceOhmPerM(), "Ω/m", "α20 = " + alpha + " per °C" + (nec ? " (copper; NEC Table 8 note)" : " (IEC 60228 Annex B)"),
+                "0.000000", P + "OhmPerM");
+        r = f(s, r, "Round-trip resistance", "2*" + P + "LengthM" + "*" + P + "OhmPerM" + "/" + P + "Sets", vd.roundTripResistanceOhm(), "Ω", "out and back",
+                "0.000000", P + "CableOhm");
+        r = f(s, r, "Voltage drop at the continuous current", P + "ContA" + "*" + P + "CableOhm", vd.dropV(), "V", "", Styles.D3, P + "DropV");
+        r = f(s, r, "Voltage drop", "100*" + P + "DropV" + "/" + P + "NominalV", vd.dropPct(), "%", "", Styles.D2, P + "DropPct");
+        String dev = nec ? "NecDev_A" : "IecDev_rating_a";
+        String next = "IFERROR(IF(INDEX(" + dev + ",MATCH(%1$s-RoundingSlack," + dev + ",1))>=%1$s-RoundingSlack,INDEX(" + dev
+                + ",MATCH(%1$s-RoundingSlack," + dev + ",1)),INDEX(" + dev + ",MATCH(%1$s-RoundingSlack," + dev + ",1)+1)),INDEX(" + dev + ",1))";
+        r = f(s, r, "Overcurrent device rating", String.format(next, P + "DesignA"), cable.device().ratingA(), "A",
+                nec ? "next standard rating at or above the design current, NEC 2023 240.6(A)" : "next rating at or above Ib (IEC ratings from memory)",
+                Styles.INT, P + "DeviceA");
+        String limit = nec ? "IF(" + P + "DeviceA" + "<=" + P + "AllowableA" + "+RoundingSlack," + P + "AllowableA" + ",IF(AND(" + P + "DeviceA" + "<=800,COUNTIF(NecDev_A," + P + "AllowableA" + ")=0," + P + "DeviceA" + "="
+                + String.format(next, P + "AllowableA") + ")," + P + "DeviceA" + "," + P + "AllowableA" + "))" : P + "AllowableA";
+        r = f(s, r, "Largest rating that protects the conductor", limit,
+                org.holdover.sizing.Sizing.deviceLimit(cable.device()), "A",
+                nec ? "the allowable ampacity, or the next standard rating above it (240.4(B), up to 800 A)" : "Iz", Styles.D1, P + "DeviceLimitA");
+        for (String note : cable.notes()) {
+            r = s.paragraph(r, 0, 3, note, ctx.styles.noteWrap, 150);
+        }
+        return r;
+    }
 
     /** Linear interpolation in a table column with the end rows held (the engine's rule). */
     static String interp(String x, String xs, String ys, int n) {

@@ -92,6 +92,7 @@ public final class WorkbookWriter {
             PvSheet.write(ctx, bankRow);
             SimulationSheet.write(ctx, result.year());
             MonthlySheet.write(ctx, result.year());
+            AlternativesSheet.write(ctx);
             SummarySheet.write(ctx, bankRow);
             CautionsSheet.write(ctx);
             printSetup(ctx);

@@ -40,8 +40,13 @@ public final class HourlyConditions {
         double[] l = loadW.clone();
         double[] p = pvArrayW.clone();
         for (int t = 0; t < l.length; t++) {
-            Checks.nonNegative("loadW[" + t + "]", l[t]);
-            Checks.nonNegative("pvArrayW[" + t + "]", p[t]);
+            // The name is built only for a value that fails (building it every hour dominated the cost).
+            if (!(l[t] >= 0) || Double.isInfinite(l[t])) {
+                Checks.nonNegative("loadW[" + t + "]", l[t]);
+            }
+            if (!(p[t] >= 0) || Double.isInfinite(p[t])) {
+                Checks.nonNegative("pvArrayW[" + t + "]", p[t]);
+            }
         }
         return new HourlyConditions(l, p, new boolean[l.length], new boolean[l.length]);
     }
@@ -86,7 +91,11 @@ public final class HourlyConditions {
         Checks.finite("limitC", limitC);
         boolean[] f = new boolean[batteryTempC.length];
         for (int t = 0; t < f.length; t++) {
-            f[t] = Checks.finite("batteryTempC[" + t + "]", batteryTempC[t]) < limitC;
+            double v = batteryTempC[t];
+            if (!Double.isFinite(v)) {
+                Checks.finite("batteryTempC[" + t + "]", v);
+            }
+            f[t] = v < limitC;
         }
         return f;
     }

@@ -230,7 +230,16 @@ public final class ProjectAssembler {
                 : w.standard();
         boolean fine = w != null && Boolean.TRUE.equals(w.fineStranded());
         double bus = p.rules() != null && p.rules().busVoltageV() != null ? p.rules().busVoltageV() : 0;
-        return new WiringRules(length, dropPct, ambient,
+        Double ctl = w == null ? null : w.batteryToControllerM();
+        Double pvRun = w == null ? null : w.pvToControllerM();
+        if (p.solar() != null) {
+            assumptions.add(new Assumption("Controller-to-battery cable, one way", ctl == null ? PvCircuits.DEFAULT_CONTROLLER_RUN_M : ctl, "m",
+                    ctl == null ? "default" : "project", ctl == null ? PRACTICE : "project"));
+            assumptions.add(new Assumption("PV output circuit, one way", pvRun == null ? PvCircuits.DEFAULT_PV_RUN_M : pvRun, "m",
+                    pvRun == null ? "default" : "project", pvRun == null ? PRACTICE : "project"));
+        }
+        return new WiringRules(length, ctl == null ? PvCircuits.DEFAULT_CONTROLLER_RUN_M : ctl,
+                pvRun == null ? PvCircuits.DEFAULT_PV_RUN_M : pvRun, dropPct, ambient,
                 std == ProjectInput.ConductorStandard.NEC ? org.holdover.dc.TableSystem.NEC : org.holdover.dc.TableSystem.IEC,
                 fine, bus);
     }
@@ -351,5 +360,21 @@ public final class ProjectAssembler {
     private static double runningVa(ApplianceInput a) {
         double pf = a.powerFactor() != null ? a.powerFactor() : a.motor() != null ? DEFAULT_PF_MOTOR : DEFAULT_PF_RESISTIVE;
         return a.watts() / pf * (a.quantity() == null ? 1 : a.quantity());
+    }
+
+    /**
+     * The search's options from the project's rules (defaults where not given).
+     *
+     * @param p         the project
+     * @param cancelled asked to stop (null: never)
+     * @param progress  progress reports (null: none)
+     */
+    public static SystemSearch.Options searchOptions(ProjectInput p, java.util.function.BooleanSupplier cancelled,
+                                                     SystemSearch.Progress progress) {
+        ProjectInput.RulesInput r = p.rules();
+        int alternatives = r != null && r.alternatives() != null ? r.alternatives() : SystemSearch.DEFAULT_ALTERNATIVES;
+        double growth = r != null && r.loadGrowthPct() != null ? r.loadGrowthPct() : SystemSearch.DEFAULT_LOAD_GROWTH_PCT;
+        double solar = r != null && r.poorerSolarPct() != null ? r.poorerSolarPct() : SystemSearch.DEFAULT_POORER_SOLAR_PCT;
+        return new SystemSearch.Options(alternatives, growth, solar, cancelled, progress);
     }
 }

@@ -92,6 +92,44 @@ public final class PvSizing {
      * @param energy the energy basis with the chosen inverter
      */
     public static SolarDesign size(SizingInput in, BusOption chosen, EnergyBasis energy) {
+        return size(in, chosen, energy, null);
+    }
+
+    /**
+     * As {@link #size(SizingInput, BusOption, EnergyBasis)}, with the layout of one module and controller pair fixed
+     * (a system search's choice): that pair's option uses the pinned layout and is the one chosen.
+     *
+     * @param pin the fixed layout, or null for the sizing's own choice
+     */
+    public static SolarDesign size(SizingInput in, BusOption chosen, EnergyBasis energy, SystemPin.PvPin pin) {
+        Pairs p = pairs(in, chosen, energy);
+        if (p.failure != null) {
+            return p.failure;
+        }
+        List<PvOption> options = new ArrayList<>();
+        PvOption pinned = null;
+        for (Pair pair : p.pairs) {
+            PvOption o = pair.option();
+            if (pin != null && pin.moduleId().equals(pair.mi.id()) && pin.controllerId().equals(pair.ci.id())) {
+                o = pair.variant(o, pin.modulesPerString(), pin.stringsPerController(), pin.controllers());
+                pinned = o;
+            }
+            options.add(o);
+        }
+        if (pin != null && pinned == null) {
+            throw new IllegalArgumentException("pinned PV pair " + pin.moduleId() + " / " + pin.controllerId() + " was not sized");
+        }
+        options.sort(ORDER);
+        PvOption best = pinned != null ? pinned : options.get(0);
+        return new SolarDesign(p.s, p.method, p.rte, p.load, p.refill, p.cond, p.bus, options, best, best.checks(),
+                best.advisories(), "");
+    }
+
+    /**
+     * Every module and controller pair for the bank at the bus option, ready to build the sizing's own layout or a
+     * fixed one; or the design saying why none can be sized.
+     */
+    public static Pairs pairs(SizingInput in, BusOption chosen, EnergyBasis energy) {
         SolarSetup s = in.solar();
         BankDesign bank = chosen.bank();
         double rte = bank.module().chemistry().roundTripEfficiency();
@@ -119,11 +157,11 @@ public final class PvSizing {
             Check none = new Check(CONTROLLERS, "Catalog " + what, 0, 1, "units", Check.Sense.AT_LEAST,
                     "catalog: chargeControllers whose batteryV lists " + fmt(bus)
                             + (s.controllerType() == null ? "" : " (solar.controller: " + s.controllerType().name().toLowerCase(Locale.ROOT) + ")"));
-            return new SolarDesign(s, method, rte, load, refill, cond, bus, List.of(), null, List.of(none), List.of(),
-                    "no " + what + " in the catalog");
+            return new Pairs(null, null, 0, null, null, 0, 0, List.of(), new SolarDesign(s, method, rte, load, refill, cond,
+                    bus, List.of(), null, List.of(none), List.of(), "no " + what + " in the catalog"));
         }
         double[] air = s.weather().airTempC();
-        List<PvOption> options = new ArrayList<>();
+        List<Pair> pairs = new ArrayList<>();
         int infeasible = 0;
         int sunlessMonths = 0;
         List<PvModuleItem> modules = in.catalog().pvModules();
@@ -163,20 +201,56 @@ public final class PvSizing {
                     byTilt[i] = tr.options().get(i).sizing().requiredStcW() / eta;
                 }
                 double[] tried = tr.options().stream().mapToDouble(TiltSearch.Option::tiltDeg).toArray();
-                options.add(option(s, mi, ci, tilt, tried, byTilt, psh, pr, derate, sizing, poa, air, cond, load, refill, days, rte,
+                pairs.add(new Pair(s, mi, ci, tilt, tried, byTilt, psh, pr, derate, sizing, poa, air, cond, load, refill, days, rte,
                         offGrid));
             }
         }
-        if (options.isEmpty()) {
+        if (pairs.isEmpty()) {
             Check sun = new Check(SUN, "Months whose load the sun at the site can meet", 12 - sunlessMonths, 12, "months",
                     Check.Sense.AT_LEAST, "a month with load but no sunshine on the array cannot be met by any array");
-            return new SolarDesign(s, method, rte, load, refill, cond, bus, List.of(), null, List.of(sun), List.of(),
-                    "some month has load but no sun on the array (" + infeasible + " module and controller pairs)");
+            return new Pairs(null, null, 0, null, null, 0, 0, List.of(), new SolarDesign(s, method, rte, load, refill, cond,
+                    bus, List.of(), null, List.of(sun), List.of(),
+                    "some month has load but no sun on the array (" + infeasible + " module and controller pairs)"));
         }
-        options.sort(ORDER);
-        PvOption best = options.get(0);
-        return new SolarDesign(s, method, rte, load, refill, cond, bus, options, best, best.checks(), best.advisories(),
-                "");
+        return new Pairs(s, method, rte, load, cond, refill, bus, pairs, null);
+    }
+
+    /**
+     * The pairs of one bank, with what the design needs to be written (or, in {@code failure}, why none).
+     */
+    public record Pairs(SolarSetup s, SolarDesign.Method method, double rte, double[] load, StringDesignConditions cond,
+                        double refill, double bus, List<Pair> pairs, SolarDesign failure) {
+    }
+
+    /** One module and controller pair at its tilt, with its monthly sizing. */
+    public record Pair(SolarSetup s, PvModuleItem mi, ControllerItem ci, double tilt, double[] tried, double[] byTilt,
+                       double[] psh, double[] pr, double[] derate, MonthlySizingResult sizing, PoaSeries poa, double[] air,
+                       StringDesignConditions cond, double[] load, double refill, double days, double rte, boolean offGrid) {
+
+        /** The sizing's own layout: the requirement raised until the hourly check meets every month's need. */
+        public PvOption option() {
+            return PvSizing.option(s, mi, ci, tilt, tried, byTilt, psh, pr, derate, sizing, poa, air, cond, load, refill, days,
+                    rte, offGrid);
+        }
+
+        /**
+         * A fixed layout, checked against the same requirement as the sizing's own.
+         *
+         * @param base this pair's own option ({@link #option()}), whose requirement and top-up are kept
+         */
+        public PvOption variant(PvOption base, int modulesPerString, int stringsPerController, int controllers) {
+            return PvSizing.variant(this, base, modulesPerString, stringsPerController, controllers);
+        }
+
+        /** The string lengths the controller's window allows at these conditions (empty when none). */
+        public StringWindowRange window() {
+            org.holdover.pv.StringWindow w = org.holdover.pv.StringWindow.of(mi.module(), ci.controller(), cond);
+            return w.isEmpty() ? new StringWindowRange(1, 0) : new StringWindowRange(w.minModules(), w.maxModules());
+        }
+    }
+
+    /** Modules per string from {@code min} to {@code max} (empty when max &lt; min). */
+    public record StringWindowRange(int min, int max) {
     }
 
     /** Coarse tilt step of the search, in steps of the setup's tilt list (every 5th: 5° with 1° steps). */
@@ -260,14 +334,33 @@ public final class PvSizing {
         Built b = null;
         for (int i = 0; i <= MAX_TOP_UPS; i++) {
             double required = Math.max(sizing.requiredStcW() * topUp, Double.MIN_NORMAL);
-            ArrayCandidate cand = ArrayChooser.choose(new ArrayChooser.Input(required, List.of(mi.module()),
-                    List.of(ci.controller()), cond, s.maxControllers())).get(0);
+            ArrayChooser.Input chooserIn = new ArrayChooser.Input(required, List.of(mi.module()), List.of(ci.controller()), cond,
+                    s.maxControllers());
+            ArrayCandidate cand = ArrayChooser.choose(chooserIn).get(0);
             b = build(cand, poa, air, s, cond, need, required, topUp);
+
             if (b.ratio >= 1.0 || !cand.passesRequired() || i == MAX_TOP_UPS) {
                 break;
             }
             topUp = topUp / b.ratio * (1 + TOP_UP_SLACK);
         }
+        return finish(s, mi, ci, tilt, tiltsTried, byTilt, psh, pr, derate, sizing, poa, cond, need, topUp, b, offGrid);
+    }
+
+    static PvOption variant(Pair p, PvOption base, int n, int strings, int k) {
+        double[] need = base.needWhPerDay();
+        ArrayChooser.Input chooserIn = new ArrayChooser.Input(base.requiredStcW(), List.of(p.mi.module()),
+                List.of(p.ci.controller()), p.cond, Math.max(k, p.s.maxControllers()));
+        ArrayCandidate f = ArrayChooser.fixed(p.mi.module(), p.ci.controller(), n, strings, k, chooserIn);
+        Built b = build(f, base.poa(), p.air, p.s, p.cond, need, base.requiredStcW(), base.topUp());
+        return finish(p.s, p.mi, p.ci, p.tilt, p.tried, p.byTilt, p.psh, p.pr, p.derate, p.sizing, base.poa(), p.cond, need,
+                base.topUp(), b, p.offGrid);
+    }
+
+    private static PvOption finish(SolarSetup s, PvModuleItem mi, ControllerItem ci, double tilt, double[] tried,
+                                   double[] byTilt, double[] psh, double[] pr, double[] derate, MonthlySizingResult sizing,
+                                   PoaSeries poa, StringDesignConditions cond, double[] need, double topUp, Built b,
+                                   boolean offGrid) {
         ArrayCandidate cand = b.candidate;
         boolean pwm = ci.controller().type() == ControllerType.PWM;
         List<Check> checks = new ArrayList<>();
@@ -296,7 +389,7 @@ public final class PvSizing {
                     "hourly simulation, two-line I–V curve at the cell temperature; limit our rule, no source"));
         }
         double price = cand.totalModules() * mi.price() + cand.controllerCount() * ci.price();
-        return new PvOption(mi, ci, tilt, tiltsTried, byTilt, psh, pr, derate, sizing, topUp, b.required, cand, poa, b.dc,
+        return new PvOption(mi, ci, tilt, tried, byTilt, psh, pr, derate, sizing, topUp, b.required, cand, poa, b.dc,
                 out, b.outWhPerDay, need, t, checks, advisories, price);
     }
 

@@ -32,7 +32,23 @@ public final class Sizing {
     private Sizing() {
     }
 
+    /** The system search's choice, written out in full, with the search's findings. */
     public static SizingResult run(SizingInput in) {
+        return run(in, SystemSearch.Options.defaults());
+    }
+
+    /** As {@link #run(SizingInput)} with search options (alternatives, sensitivity cases, progress, stop). */
+    public static SizingResult run(SizingInput in, SystemSearch.Options options) {
+        SearchResult search = SystemSearch.run(in, options);
+        SystemPin pin = search.chosen() == null ? null : search.chosen().candidate().pin();
+        return rules(in, pin).withSearch(search);
+    }
+
+    /**
+     * The sizing rules alone (per bus class, from the lowest: the cheapest passing inverter and bank), or, with a pin,
+     * the pinned system written out with every check.
+     */
+    public static SizingResult rules(SizingInput in, SystemPin pin) {
         LoadAnalysis.Figures f = in.loads().figures();
         List<InverterAssessment> assessments = new ArrayList<>();
         for (InverterSpec s : in.catalog().inverters()) {
@@ -43,6 +59,9 @@ public final class Sizing {
         if (in.wiring().busVoltageV() > 0) {
             classes.removeIf(c -> c != in.wiring().busVoltageV());
         }
+        if (pin != null) {
+            classes.removeIf(c -> c != pin.busClassV());
+        }
         List<BusOption> buses = new ArrayList<>();
         BusOption chosen = null;
         EnergyBasis chosenEnergy = null;
@@ -50,11 +69,13 @@ public final class Sizing {
             List<Double> higher = new ArrayList<>(classes.tailSet(cls, false));
             in.catalog().inverters().stream().map(InverterSpec::busClassV).filter(c -> c > cls && !higher.contains(c))
                     .distinct().sorted().forEach(higher::add);
-            BusWork w = busOption(cls, assessments, in, higher.isEmpty() ? List.of() : List.of(higher.get(0)));
+            BusWork w = busOption(cls, assessments, in, higher.isEmpty() ? List.of() : List.of(higher.get(0)), pin);
             BusOption option = w.option;
             if (option.passes() && chosen == null) {
                 chosen = new BusOption(option.busClassV(), option.inverter(), option.currentCheck(), option.energyDcWh(),
-                        option.banks(), option.bank(), true, "lowest bus voltage that passes every check");
+                        option.banks(), option.bank(), true, pin != null
+                        ? "the system search's choice: least demo cost passing every check and the simulated year"
+                        : "lowest bus voltage that passes every check");
                 chosenEnergy = w.energy;
                 option = chosen;
             } else if (option.passes()) {
@@ -64,7 +85,7 @@ public final class Sizing {
             buses.add(option);
         }
         if (chosen == null) {
-            return new SizingResult(in, assessments, buses, null, null, null, List.of(), List.of(), 0, 0, null, null);
+            return new SizingResult(in, assessments, buses, null, null, null, List.of(), List.of(), 0, 0, null, null, null, null);
         }
         InverterAssessment inv = chosen.inverter();
         BankDesign bank = chosen.bank();
@@ -77,10 +98,15 @@ public final class Sizing {
         advisories.add(new Check("dc.shortCircuit", "Prospective short-circuit current at the battery terminals",
                 dc.shortCircuit().atBatteryTerminalsA(), org.holdover.dc.ShortCircuit.COMMON_ORDINARY_DEVICE_LIMIT_A, "A",
                 Check.Sense.AT_MOST, "above this, use a DC device rated to interrupt it (common practice, no source)"));
-        SolarDesign solar = in.solar() == null ? null : PvSizing.size(in, chosen, chosenEnergy);
+        SolarDesign solar = in.solar() == null ? null : PvSizing.size(in, chosen, chosenEnergy, pin == null ? null : pin.pv());
         if (solar != null) {
             checks.addAll(solar.checks());
             advisories.addAll(solar.advisories());
+        }
+        PvCircuits pvCircuits = solar != null && solar.chosen() != null
+                ? PvCircuits.size(in, solar.chosen().candidate(), bank.bankNominalV()) : null;
+        if (pvCircuits != null) {
+            checks.addAll(pvCircuits.checks());
         }
         LossModel loss = inv.spec().loss();
         double[] batteryTemp = new double[in.loads().calendar().hours()];
@@ -107,7 +133,7 @@ public final class Sizing {
                     year.unmetLimitWh(), "Wh", Check.Sense.AT_MOST, "project reliability target; hour-by-hour energy balance"));
         }
         return new SizingResult(in, assessments, buses, chosen, chosenEnergy, bank.requirement(), checks, advisories,
-                WeightedEfficiency.CEC.of(loss), WeightedEfficiency.EURO.of(loss), year, solar);
+                WeightedEfficiency.CEC.of(loss), WeightedEfficiency.EURO.of(loss), year, solar, pvCircuits, null);
     }
 
     static InverterAssessment assess(InverterSpec s, SizingInput in) {
@@ -155,9 +181,18 @@ public final class Sizing {
     private record BusWork(BusOption option, EnergyBasis energy) {
     }
 
-    private static BusWork busOption(double cls, List<InverterAssessment> all, SizingInput in, List<Double> higher) {
+    /** The continuous battery current at the inverter's cutoff against the project's rule. */
+    static Check currentCheck(SizingInput in, InverterAssessment inv) {
+        return new Check("bus.continuousA", "Continuous battery current at the low-voltage cutoff",
+                inv.continuousDcA(), in.maxBatteryCurrentA(), "A", Check.Sense.AT_MOST,
+                "project rule: largest continuous battery current (keeps cables and fuses practical)");
+    }
+
+    private static BusWork busOption(double cls, List<InverterAssessment> all, SizingInput in, List<Double> higher,
+                                     SystemPin pin) {
         List<InverterAssessment> atClass = all.stream().filter(a -> a.spec().busClassV() == cls).toList();
         List<InverterAssessment> passing = atClass.stream().filter(InverterAssessment::passes)
+                .filter(a -> pin == null || a.spec().id().equals(pin.inverterId()))
                 .sorted(Comparator.comparingDouble((InverterAssessment a) -> a.spec().price())
                         .thenComparingDouble(a -> a.spec().continuousW()))
                 .toList();
@@ -169,9 +204,7 @@ public final class Sizing {
         double bestCost = Double.POSITIVE_INFINITY;
         BusWork firstTried = null;
         for (InverterAssessment inv : passing) {
-            Check current = new Check("bus.continuousA", "Continuous battery current at the low-voltage cutoff",
-                    inv.continuousDcA(), in.maxBatteryCurrentA(), "A", Check.Sense.AT_MOST,
-                    "project rule: largest continuous battery current (keeps cables and fuses practical)");
+            Check current = currentCheck(in, inv);
             EnergyBasis energy = energy(in, inv.spec().loss());
             List<BankOption> banks = new ArrayList<>();
             for (BatteryModule m : in.catalog().batteryModules()) {
@@ -182,11 +215,15 @@ public final class Sizing {
                     continue;
                 }
                 BankDesign d = BankSizing.size(m, requirement(in, m.chemistry(), cls, energy, inv));
+                if (pin != null && m.id().equals(pin.batteryModuleId()) && pin.strings() > d.strings()) {
+                    d = d.withStrings(pin.strings());
+                }
                 String incompatible = incompatibility(d, inv.spec());
                 DcDesign dc = d.feasible() && incompatible.isEmpty() ? DcSide.evaluate(in, inv.spec(), d, higher) : null;
                 banks.add(new BankOption(d, incompatible, dc));
             }
             BankOption bank = banks.stream().filter(BankOption::usable)
+                    .filter(b -> pin == null || b.design().module().id().equals(pin.batteryModuleId()))
                     .min(Comparator.comparingDouble((BankOption b) -> b.design().price())
                             .thenComparingDouble(b -> b.design().bankEnergyWh()))
                     .orElse(null);

@@ -64,4 +64,12 @@ public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms
             throw new IllegalArgumentException("off-grid mode needs autonomy days > 0");
         }
     }
+
+    /** The same input with other cable runs and conductor rules. */
+    public SizingInput withWiring(WiringRules w) {
+        return new SizingInput(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin,
+                maxBatteryCurrentA, maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours, autonomyDays,
+                loads, catalog, assumptions, warnings, notes, measuredW, profileScale, profileServed, w, maxUnmetFraction,
+                batteryDesignC, solar);
+    }
 }

@@ -19,11 +19,14 @@ import org.holdover.battery.BankRequirement;
  * @param euroEfficiency    European weighted efficiency of the chosen inverter's loss model
  * @param year              the chosen system over a simulated year (null when none was chosen or off grid without PV)
  * @param solar             the PV array and charge controller(s), or null (no solar section, or no system chosen)
+ * @param pvCircuits        the PV-side conductors, or null without an array
+ * @param search            what the system search found (null when the rules alone were run)
  */
 public record SizingResult(SizingInput input, List<InverterAssessment> inverters, List<BusOption> buses,
                            BusOption chosen, EnergyBasis energy, BankRequirement requirement, List<Check> checks,
                            List<Check> advisories, double cecEfficiency, double euroEfficiency,
-                           YearCheck year, SolarDesign solar) {
+                           YearCheck year, SolarDesign solar, PvCircuits pvCircuits,
+                           SearchResult search) {
 
     public SizingResult {
         inverters = List.copyOf(inverters);
@@ -45,5 +48,11 @@ public record SizingResult(SizingInput input, List<InverterAssessment> inverters
     /** The chosen inverter, or null. */
     public InverterAssessment inverter() {
         return chosen == null ? null : chosen.inverter();
+    }
+
+    /** The same result with the search's findings. */
+    public SizingResult withSearch(SearchResult s) {
+        return new SizingResult(input, inverters, buses, chosen, energy, requirement, checks, advisories, cecEfficiency,
+                euroEfficiency, year, solar, pvCircuits, s);
     }
 }

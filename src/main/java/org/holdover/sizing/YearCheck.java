@@ -126,18 +126,75 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
     public static YearCheck run(SizingInput in, BankDesign bankDesign, LossModel loss, EnergyBasis energy, double[] pvArrayW,
                                 double controllerEfficiency, double controllerLimitW, double unmetLimitFraction,
                                 double[] batteryTempC) {
-        LoadAnalysis la = in.loads();
-        int n = la.calendar().hours();
+        Prepared p = prepare(in, bankDesign, loss, energy, pvArrayW, controllerEfficiency, controllerLimitW, unmetLimitFraction,
+                batteryTempC);
+        SystemDesign design = p.warmed();
+        Chemistry c = bankDesign.module().chemistry();
+        double[][] curve = c.cycleLife();
+        AnalysisOptions life = new AnalysisOptions(java.util.List.of(), java.util.Optional.of(new org.holdover.sim.BatteryAging(
+                new org.holdover.sim.CycleLifeCurve(curve[0], curve[1]), c.calendarLifeYears())));
+        TracedYear traced = YearSimulation.runTraced(design, p.conditions(), life);
+        double scale = scaleNeeded(design, p.conditions(), p.unmetLimitWh());
+        return new YearCheck(design.battery(), design.controller(), design.inverter(), design.charger(), p.loadW(), p.pvArrayW(),
+                p.gridAvailable(), p.chargeForbidden(), traced, p.unmetLimitWh(), scale);
+    }
+
+    /**
+     * A system ready to simulate: the design (bank full at the start), the year's conditions, and the unmet energy
+     * the project accepts.
+     */
+    public record Prepared(SystemDesign design, HourlyConditions conditions, double[] loadW, double[] pvArrayW,
+                           boolean[] gridAvailable, boolean[] chargeForbidden, double unmetLimitWh) {
+
+        /** The design starting from the state of charge one warm-up year ends with. */
+        public SystemDesign warmed() {
+            BatteryBank b = design.battery();
+            double start = YearSimulation.run(design, conditions, AnalysisOptions.NONE).battery().finalSoc();
+            start = Math.min(1.0, Math.max(b.floorSoc(), start));
+            return design.withBattery(new BatteryBank(b.nominalEnergyWh(), b.floorSoc(), b.ceilingSoc(), start,
+                    b.chargeEfficiency(), b.dischargeEfficiency(), b.maxChargeW(), b.maxDischargeW()));
+        }
+
+        /** The year's metrics after the warm-up year (no life analysis): two simulated years. */
+        public SimulationMetrics quick() {
+            return YearSimulation.run(warmed(), conditions, AnalysisOptions.NONE);
+        }
+
+        /** The same system with another bank (same conditions). */
+        public Prepared withBank(BatteryBank bank) {
+            return new Prepared(design.withBattery(bank), conditions, loadW, pvArrayW, gridAvailable, chargeForbidden,
+                    unmetLimitWh);
+        }
+
+        /** The same system under other conditions (load or PV scaled for a sensitivity case). */
+        public Prepared withConditions(HourlyConditions c, double[] load, double[] pv) {
+            return new Prepared(design, c, load, pv, gridAvailable, chargeForbidden, unmetLimitWh);
+        }
+    }
+
+    /** The bank as simulated: rated energy ÷ (temperature × aging factors), floor from the depth of discharge, full. */
+    public static BatteryBank bank(BankDesign bankDesign) {
         BatteryModule m = bankDesign.module();
         Chemistry c = m.chemistry();
         double nominal = bankDesign.bankEnergyWh() / (bankDesign.temperatureFactor() * bankDesign.agingFactor());
         double floor = 1.0 - bankDesign.requirement().depthOfDischarge();
         double maxCharge = bankDesign.strings() * m.maxChargeA() * bankDesign.bankNominalV();
         double maxDischarge = bankDesign.strings() * m.maxContinuousA() * bankDesign.bankNominalV();
+        return new BatteryBank(nominal, floor, 1.0, 1.0, c.roundTripEfficiency(), 1.0, maxCharge, maxDischarge);
+    }
+
+    /** See {@link #run}; the same system, ready to simulate. */
+    public static Prepared prepare(SizingInput in, BankDesign bankDesign, LossModel loss, EnergyBasis energy, double[] pvArrayW,
+                                   double controllerEfficiency, double controllerLimitW, double unmetLimitFraction,
+                                   double[] batteryTempC) {
+        LoadAnalysis la = in.loads();
+        int n = la.calendar().hours();
+        Chemistry c = bankDesign.module().chemistry();
+        BatteryBank first = bank(bankDesign);
         InverterLossModel inv = new InverterLossModel(loss.ratedW(), loss.p0(), loss.k1(), loss.k2());
         ChargeController cc = new ChargeController(controllerEfficiency, controllerLimitW);
         boolean backup = in.mode() == ProjectInput.Mode.BACKUP;
-        Charger charger = backup ? new Charger(maxCharge / GRID_CHARGER_EFFICIENCY, GRID_CHARGER_EFFICIENCY) : Charger.NONE;
+        Charger charger = backup ? new Charger(first.maxChargeW() / GRID_CHARGER_EFFICIENCY, GRID_CHARGER_EFFICIENCY) : Charger.NONE;
         double[] pv = pvArrayW == null ? new double[n] : pvArrayW.clone();
         boolean[] grid = new boolean[n];
         if (backup) {
@@ -146,22 +203,13 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
                 grid[h] = false;
             }
         }
-        boolean[] forbidden = batteryTempC == null ? new boolean[n]
+        // A chemistry without a cold-charging limit (lead-acid: −∞) is never stopped from charging.
+        boolean[] forbidden = batteryTempC == null || !Double.isFinite(c.noChargeBelowC()) ? new boolean[n]
                 : HourlyConditions.chargeForbiddenBelow(batteryTempC, c.noChargeBelowC());
         HourlyConditions cond = HourlyConditions.offGrid(la.loadW(), pv).withGridAvailable(grid).withChargeForbidden(forbidden);
         double unmetLimit = unmetLimitFraction * sum(la.loadW());
-        BatteryBank first = new BatteryBank(nominal, floor, 1.0, 1.0, c.roundTripEfficiency(), 1.0, maxCharge, maxDischarge);
-        SystemDesign warm = new SystemDesign(cc, inv, first, charger, java.util.Optional.empty());
-        double start = YearSimulation.run(warm, cond, AnalysisOptions.NONE).battery().finalSoc();
-        start = Math.min(1.0, Math.max(floor, start));
-        BatteryBank bank = new BatteryBank(nominal, floor, 1.0, start, c.roundTripEfficiency(), 1.0, maxCharge, maxDischarge);
-        SystemDesign design = new SystemDesign(cc, inv, bank, charger, java.util.Optional.empty());
-        double[][] curve = c.cycleLife();
-        AnalysisOptions life = new AnalysisOptions(java.util.List.of(), java.util.Optional.of(new org.holdover.sim.BatteryAging(
-                new org.holdover.sim.CycleLifeCurve(curve[0], curve[1]), c.calendarLifeYears())));
-        TracedYear traced = YearSimulation.runTraced(design, cond, life);
-        double scale = scaleNeeded(design, cond, unmetLimit);
-        return new YearCheck(bank, cc, inv, charger, la.loadW().clone(), pv, grid, forbidden, traced, unmetLimit, scale);
+        SystemDesign design = new SystemDesign(cc, inv, first, charger, java.util.Optional.empty());
+        return new Prepared(design, cond, la.loadW().clone(), pv, grid, forbidden, unmetLimit);
     }
 
     /** Smallest bank multiple (bisection, 1 % resolution) leaving at most the limit unmet; NaN when none up to the maximum. */

@@ -23,6 +23,16 @@ final class Demos {
         return cabin;
     }
 
+    private static SizingResult farmRules;
+
+    /** The farm sized by the rules alone (no system search): the PV sizing chain's own choice. */
+    static synchronized SizingResult farmRules() {
+        if (farmRules == null) {
+            farmRules = Sizing.rules(input(FARM), null);
+        }
+        return farmRules;
+    }
+
     static synchronized SizingResult farm() {
         if (farm == null) {
             farm = size(FARM);

@@ -70,7 +70,7 @@ class PvSizingChainTest {
 
     @Test
     void backupFarmRefillsTheOutageWhileCarryingTheLoads() {
-        SizingResult r = Demos.farm();
+        SizingResult r = Demos.farmRules();
         PvOption o = r.solar().chosen();
         assertThat(o.module().id()).isEqualTo("DEMO-PV-400-72");
         assertThat(o.controller().id()).isEqualTo("DEMO-MPPT-250-100");

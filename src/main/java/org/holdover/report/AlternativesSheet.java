@@ -1,0 +1,210 @@
+package org.holdover.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.poi.xddf.usermodel.chart.MarkerStyle;
+import org.apache.poi.xddf.usermodel.PresetColor;
+import org.apache.poi.xddf.usermodel.XDDFColor;
+import org.apache.poi.xddf.usermodel.XDDFLineProperties;
+import org.apache.poi.xddf.usermodel.XDDFShapeProperties;
+import org.apache.poi.xddf.usermodel.XDDFSolidFillProperties;
+import org.apache.poi.xddf.usermodel.chart.AxisCrosses;
+import org.apache.poi.xddf.usermodel.chart.AxisPosition;
+import org.apache.poi.xddf.usermodel.chart.ChartTypes;
+import org.apache.poi.xddf.usermodel.chart.ScatterStyle;
+import org.apache.poi.xddf.usermodel.chart.XDDFDataSourcesFactory;
+import org.apache.poi.xddf.usermodel.chart.XDDFNumericalDataSource;
+import org.apache.poi.xddf.usermodel.chart.XDDFScatterChartData;
+import org.apache.poi.xddf.usermodel.chart.XDDFValueAxis;
+import org.apache.poi.xssf.streaming.SXSSFSheet;
+import org.apache.poi.xssf.usermodel.XSSFChart;
+import org.apache.poi.xssf.usermodel.XSSFClientAnchor;
+import org.apache.poi.xssf.usermodel.XSSFDrawing;
+import org.holdover.sizing.SearchResult;
+import org.holdover.sizing.SystemPin;
+
+/**
+ * The system search: the chosen system and the next best, each system's demo cost as a formula over its parts'
+ * counts and prices; the cost-versus-unmet-energy frontier with a chart; the chosen system under more load and less
+ * sun; and every family left out with the check that failed.
+ */
+final class AlternativesSheet {
+
+    private AlternativesSheet() {
+    }
+
+    private static final String[] HEAD = {"System", "Bus V", "Inverter", "Inverter price", "Battery module", "Battery modules",
+        "Module price", "Strings", "Bank kWh", "PV module", "PV modules", "PV module price", "Modules per string",
+        "Strings per controller", "Controllers", "Controller", "Controller price", "Array kW", "Demo cost",
+        "Unmet Wh (simulated year)", "Hours unmet", "Lowest state of charge", "Smallest check margin", "Note"};
+    static final int COST = 18;
+
+    static void write(Context ctx) {
+        SheetWriter s = ctx.sheet(Context.ALTERNATIVES);
+        SearchResult sr = ctx.r.search();
+        int r = 0;
+        s.text(r++, 0, "Alternatives: the system search", ctx.styles.title);
+        r = s.paragraph(r, 0, 12, "Every combination the catalog allows (bus × inverter × battery module × strings × PV module ×"
+                + " controller × modules per string × strings × controllers) is checked part by part; the systems whose parts"
+                + " all pass are simulated over the year in order of demo cost, and the first that leaves no more unmet energy"
+                + " than the project accepts is chosen. Demo prices are invented: with your own catalog's prices the order"
+                + " may change. The demo cost of each row is a formula over its counts and prices; the unmet energy of each"
+                + " row comes from the engine's simulated year (the chosen system's year is on the Year simulation sheet)."
+                + " Cables, fuses, racking and labour are not in the cost.", ctx.styles.noteWrap, 150) + 1;
+        if (sr == null) {
+            s.text(r, 0, "The search was not run for this result.");
+            return;
+        }
+        var st = sr.stats();
+        s.text(r, 0, "Component checks evaluated");
+        s.input(r++, 3, st.cheapChecks(), Styles.INT);
+        s.text(r, 0, "Whole systems passing every component check");
+        s.input(r++, 3, st.candidates(), Styles.INT);
+        s.text(r, 0, "Years simulated");
+        s.input(r++, 3, st.simulated(), Styles.INT);
+        s.text(r, 0, "Skipped: a larger system of the same family had already failed");
+        s.input(r++, 3, st.pruned(), Styles.INT);
+        s.text(r, 0, "Unmet energy the project accepts over the year, Wh");
+        s.input(r++, 3, sr.unmetLimitWh(), Styles.INT);
+        if (st.stoppedEarly()) {
+            s.text(r++, 0, "STOPPED EARLY by the user: this is the best system found so far, not necessarily the least cost.",
+                    ctx.styles.bold);
+        }
+        r++;
+        s.text(r++, 0, "The chosen system and the next best of other families", ctx.styles.subtitle);
+        List<SearchResult.Evaluated> rows = new ArrayList<>();
+        if (sr.chosen() != null) {
+            rows.add(sr.chosen());
+        }
+        rows.addAll(sr.alternatives());
+        s.header(r++, 0, HEAD);
+        int first = r;
+        for (int i = 0; i < rows.size(); i++) {
+            row(s, r++, i == 0 && sr.chosen() != null ? "chosen" : "next " + i, rows.get(i), sr);
+        }
+        if (rows.isEmpty()) {
+            s.text(r++, 0, "No system passes every check and the simulated year (see the families left out below).");
+        }
+        r++;
+        s.text(r++, 0, "Cost against unmet energy: simulated systems no cheaper one beats on unmet energy", ctx.styles.subtitle);
+        s.text(r++, 0, "Rows with a note fail a design check (too little battery for the outage or the autonomy, too little PV for"
+                + " the worst month): they show what the design checks buy, they are not offers.", ctx.styles.note);
+        s.header(r++, 0, HEAD);
+        int frontFirst = r;
+        for (SearchResult.Evaluated e : sr.frontier()) {
+            row(s, r++, e.passes() ? "passes" : e.designNote().isEmpty() ? "fails the simulated year" : "fails a design check", e, sr);
+        }
+        int frontLast = r - 1;
+        if (!sr.frontier().isEmpty()) {
+            chart(s, sr.frontier(), frontFirst, frontLast, r + 1);
+            r += 22;
+        }
+        r++;
+        s.text(r++, 0, "The chosen system with more load and with less sun", ctx.styles.subtitle);
+        s.header(r++, 0, "Case", "Change, %", "Unmet Wh", "Accepted Wh", "Still passes", "What holds or fails");
+        for (SearchResult.Sensitivity c : sr.sensitivity()) {
+            s.text(r, 0, c.label());
+            s.input(r, 1, c.changePct(), Styles.D1);
+            if (Double.isNaN(c.unmetWh())) {
+                s.text(r, 2, "not simulated");
+            } else {
+                s.input(r, 2, c.unmetWh(), Styles.INT);
+            }
+            s.input(r, 3, c.limitWh(), Styles.INT);
+            s.text(r, 4, c.passes() ? "yes" : "NO");
+            s.text(r++, 5, c.detail());
+        }
+        r++;
+        s.text(r++, 0, "Families left out, with the check that failed", ctx.styles.subtitle);
+        s.header(r++, 0, "Family (bus, inverter, battery module, PV module on controller)", "", "", "", "", "Why");
+        for (SearchResult.Rejection j : sr.rejected()) {
+            s.text(r, 0, j.family());
+            s.text(r++, 5, j.reason());
+        }
+        s.sheet.setColumnWidth(0, 24 * 256);
+        for (int c = 1; c < HEAD.length - 1; c++) {
+            s.sheet.setColumnWidth(c, 13 * 256);
+        }
+        s.sheet.setColumnWidth(2, 20 * 256);
+        s.sheet.setColumnWidth(4, 20 * 256);
+        s.sheet.setColumnWidth(9, 20 * 256);
+        s.sheet.setColumnWidth(15, 20 * 256);
+        s.sheet.setColumnWidth(HEAD.length - 1, 60 * 256);
+        if (first > 0 && sr.chosen() != null) {
+            s.name("SearchChosenCost", first, COST);
+        }
+    }
+
+    private static void row(SheetWriter s, int r, String label, SearchResult.Evaluated e, SearchResult sr) {
+        SearchResult.Candidate c = e.candidate();
+        SystemPin p = c.pin();
+        String R = String.valueOf(r + 1);
+        s.text(r, 0, label);
+        s.input(r, 1, p.busClassV(), Styles.INT);
+        s.inputText(r, 2, p.inverterId());
+        s.input(r, 3, c.inverterPrice(), Styles.INT);
+        s.inputText(r, 4, p.batteryModuleId());
+        s.input(r, 5, c.bankModules(), Styles.INT);
+        s.input(r, 6, c.bankModulePrice(), Styles.INT);
+        s.input(r, 7, p.strings(), Styles.INT);
+        s.input(r, 8, c.bankKwh(), Styles.D1);
+        SystemPin.PvPin pv = p.pv();
+        s.inputText(r, 9, pv == null ? "none" : pv.moduleId());
+        s.input(r, 10, c.pvModules(), Styles.INT);
+        s.input(r, 11, c.pvModulePrice(), Styles.INT);
+        s.input(r, 12, pv == null ? 0 : pv.modulesPerString(), Styles.INT);
+        s.input(r, 13, pv == null ? 0 : pv.stringsPerController(), Styles.INT);
+        s.input(r, 14, c.controllers(), Styles.INT);
+        s.inputText(r, 15, pv == null ? "none" : pv.controllerId());
+        s.input(r, 16, c.controllerPrice(), Styles.INT);
+        s.input(r, 17, c.pvKw(), Styles.D2);
+        s.formula(r, COST, "D" + R + "+F" + R + "*G" + R + "+K" + R + "*L" + R + "+O" + R + "*Q" + R, c.cost(), Styles.INT);
+        if (Double.isNaN(e.unmetWh())) {
+            s.text(r, 19, sr.simulated() ? "not simulated" : "not simulated (off grid without PV)");
+        } else {
+            s.input(r, 19, e.unmetWh(), Styles.INT);
+            s.input(r, 20, e.unmetHours(), Styles.INT);
+            s.input(r, 21, e.lowestSoc(), Styles.PCT);
+        }
+        if (Double.isFinite(c.lowestMargin())) {
+            s.input(r, 22, c.lowestMargin(), Styles.PCT);
+        }
+        s.text(r, 23, e.designNote());
+    }
+
+    private static void chart(SheetWriter s, List<SearchResult.Evaluated> front, int firstRow, int lastRow, int anchorRow) {
+        SXSSFSheet sheet = (SXSSFSheet) s.sheet;
+        sheet.createDrawingPatriarch();
+        XSSFDrawing d = sheet.getDrawingPatriarch();
+        XSSFClientAnchor anchor = d.createAnchor(0, 0, 0, 0, 0, anchorRow, 10, anchorRow + 20);
+        XSSFChart chart = d.createChart(anchor);
+        chart.setTitleText("Demo cost against unmet energy over the simulated year");
+        chart.setTitleOverlay(false);
+        XDDFValueAxis x = chart.createValueAxis(AxisPosition.BOTTOM);
+        x.setTitle("Demo cost");
+        XDDFValueAxis y = chart.createValueAxis(AxisPosition.LEFT);
+        y.setTitle("Unmet Wh");
+        y.setCrosses(AxisCrosses.AUTO_ZERO);
+        Double[] xs = new Double[front.size()];
+        Double[] ys = new Double[front.size()];
+        for (int i = 0; i < xs.length; i++) {
+            xs[i] = front.get(i).candidate().cost();
+            ys[i] = front.get(i).unmetWh();
+        }
+        XDDFNumericalDataSource<Double> xsrc = XDDFDataSourcesFactory.fromArray(xs, s.ref(firstRow, COST, lastRow, COST), COST);
+        XDDFNumericalDataSource<Double> ysrc = XDDFDataSourcesFactory.fromArray(ys, s.ref(firstRow, 19, lastRow, 19), 19);
+        XDDFScatterChartData data = (XDDFScatterChartData) chart.createData(ChartTypes.SCATTER, x, y);
+        data.setStyle(ScatterStyle.LINE_MARKER);
+        XDDFScatterChartData.Series series = (XDDFScatterChartData.Series) data.addSeries(xsrc, ysrc);
+        series.setTitle("Frontier", null);
+        series.setMarkerStyle(MarkerStyle.CIRCLE);
+        series.setSmooth(false);
+        XDDFShapeProperties line = new XDDFShapeProperties();
+        XDDFLineProperties lp = new XDDFLineProperties();
+        lp.setFillProperties(new XDDFSolidFillProperties(XDDFColor.from(PresetColor.STEEL_BLUE)));
+        lp.setWidth(1.5);
+        line.setLineProperties(lp);
+        series.setShapeProperties(line);
+        chart.plot(data);
+    }
+}

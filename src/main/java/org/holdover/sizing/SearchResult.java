@@ -1,0 +1,115 @@
+package org.holdover.sizing;
+
+import java.util.List;
+
+/**
+ * What the system search found.
+ *
+ * @param chosen        the least-cost system that passes every check and the simulated year, or null
+ * @param alternatives  the next best systems of other families (inverter, battery module, PV module and controller),
+ *                      least cost first
+ * @param frontier      simulated systems no other simulated system beats on both cost and unmet energy, least cost first
+ *                      (systems that fail a design check are included, marked, to show what the checks buy)
+ * @param rejected      each family left out, with the check that failed
+ * @param sensitivity   the chosen system under more load and a poorer solar year
+ * @param stats         how much work the search did
+ * @param unmetLimitWh  unmet energy the project accepts over the year, Wh
+ * @param simulated     whether candidates were checked against a simulated year (not off grid without PV)
+ */
+public record SearchResult(Evaluated chosen, List<Evaluated> alternatives, List<Evaluated> frontier, List<Rejection> rejected,
+                           List<Sensitivity> sensitivity, Stats stats, double unmetLimitWh, boolean simulated) {
+
+    public SearchResult {
+        alternatives = List.copyOf(alternatives);
+        frontier = List.copyOf(frontier);
+        rejected = List.copyOf(rejected);
+        sensitivity = List.copyOf(sensitivity);
+    }
+
+    /**
+     * One candidate system and its price.
+     *
+     * @param pin        the components
+     * @param family     the family it belongs to (bus, inverter, battery module, PV module and controller), in words
+     * @param inverterPrice demo price of the inverter
+     * @param bankModules battery modules in the bank
+     * @param bankModulePrice demo price of one battery module
+     * @param pvModules  PV modules (0 without PV)
+     * @param pvModulePrice demo price of one PV module
+     * @param controllers charge controllers (0 without PV)
+     * @param controllerPrice demo price of one controller
+     * @param bankKwh    rated bank energy, kWh
+     * @param pvKw       PV array STC power, kW
+     * @param lowestMargin the smallest margin of the candidate's cheap checks, fraction (NaN when not known)
+     */
+    public record Candidate(SystemPin pin, String family, double inverterPrice, int bankModules, double bankModulePrice,
+                            int pvModules, double pvModulePrice, int controllers, double controllerPrice, double bankKwh,
+                            double pvKw, double lowestMargin) {
+
+        /** Demo capital cost: inverter + battery modules + PV modules + controllers. */
+        public double cost() {
+            return inverterPrice + bankModules * bankModulePrice + pvModules * pvModulePrice + controllers * controllerPrice;
+        }
+
+        /** The components in a few words. */
+        public String describe() {
+            String s = String.format(java.util.Locale.ROOT, "%s V bus, %s, %d × %s (%d strings, %.1f kWh)", fmt(pin.busClassV()),
+                    pin.inverterId(), bankModules, pin.batteryModuleId(), pin.strings(), bankKwh);
+            if (pin.pv() != null) {
+                SystemPin.PvPin p = pin.pv();
+                s += String.format(java.util.Locale.ROOT, ", %d × %s (%d per string, %d strings on each of %d × %s; %.1f kW)", pvModules,
+                        p.moduleId(), p.modulesPerString(), p.stringsPerController(), p.controllers(), p.controllerId(), pvKw);
+            }
+            return s;
+        }
+    }
+
+    /**
+     * A candidate after the simulated year.
+     *
+     * @param candidate   the system
+     * @param unmetWh     energy left unmet over the year, Wh (NaN when not simulated)
+     * @param unmetHours  hours with unmet energy
+     * @param lowestSoc   lowest state of charge, fraction (NaN when not simulated)
+     * @param passes      passes every check and the simulated year
+     * @param designNote  "" for a system that passes the design checks; otherwise which one it fails (frontier only)
+     */
+    public record Evaluated(Candidate candidate, double unmetWh, int unmetHours, double lowestSoc, boolean passes,
+                            String designNote) {
+    }
+
+    /** A family left out and why. */
+    public record Rejection(String family, String reason) {
+    }
+
+    /**
+     * The chosen system under a changed assumption.
+     *
+     * @param label      what changed
+     * @param changePct  by how much, %
+     * @param unmetWh    unmet energy of the simulated year, Wh (NaN when not simulated)
+     * @param limitWh    unmet energy accepted, Wh
+     * @param passes     whether the system still passes
+     * @param detail     the checks that fail, or what held
+     */
+    public record Sensitivity(String label, double changePct, double unmetWh, double limitWh, boolean passes, String detail) {
+    }
+
+    /**
+     * @param families        component families considered
+     * @param cheapChecks     component checks evaluated (inverters, banks at each string count, PV layouts)
+     * @param candidates      whole systems passing every cheap check
+     * @param simulated       candidates simulated over a year
+     * @param pruned          candidates known to fail without simulating (a larger one of the same family failed)
+     * @param cheapMillis     time spent on the cheap checks, ms
+     * @param simMillis       time spent simulating, ms
+     * @param stoppedEarly    the search was stopped before it finished (the result is the best found so far)
+     */
+    public record Stats(int families, long cheapChecks, long candidates, long simulated, long pruned, double cheapMillis,
+                        double simMillis, boolean stoppedEarly) {
+    }
+
+    static String fmt(double v) {
+        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+    }
+}

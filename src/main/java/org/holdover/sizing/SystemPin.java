@@ -1,0 +1,45 @@
+package org.holdover.sizing;
+
+import java.util.Objects;
+
+/**
+ * One system fixed component by component (a system search's choice), for the sizing to write out in full.
+ *
+ * @param busClassV       DC bus class, V
+ * @param inverterId      catalog inverter
+ * @param batteryModuleId catalog battery module
+ * @param strings         parallel battery strings (at least what the bank's requirement asks for)
+ * @param pv              the PV layout, or null without PV
+ */
+public record SystemPin(double busClassV, String inverterId, String batteryModuleId, int strings, PvPin pv) {
+
+    public SystemPin {
+        Objects.requireNonNull(inverterId, "inverterId");
+        Objects.requireNonNull(batteryModuleId, "batteryModuleId");
+        if (strings < 1) {
+            throw new IllegalArgumentException("strings must be >= 1");
+        }
+    }
+
+    /**
+     * @param moduleId             catalog PV module
+     * @param controllerId         catalog charge controller
+     * @param modulesPerString     modules in series in each string
+     * @param stringsPerController strings on each controller
+     * @param controllers          identical controllers
+     */
+    public record PvPin(String moduleId, String controllerId, int modulesPerString, int stringsPerController, int controllers) {
+        public PvPin {
+            Objects.requireNonNull(moduleId, "moduleId");
+            Objects.requireNonNull(controllerId, "controllerId");
+            if (modulesPerString < 1 || stringsPerController < 1 || controllers < 1) {
+                throw new IllegalArgumentException("modules per string, strings and controllers must be >= 1");
+            }
+        }
+
+        /** Strings in all. */
+        public int totalStrings() {
+            return stringsPerController * controllers;
+        }
+    }
+}

@@ -1,0 +1,160 @@
+package org.holdover.sizing;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import org.holdover.catalog.Catalog;
+import org.holdover.sizing.SearchResult.Evaluated;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The system search against brute force over every combination of a small catalog (demo data), the chosen system
+ * against every check, and the reliability target's monotonicity.
+ */
+class SystemSearchTest {
+
+    /** Two 48 V inverters, two battery modules, two PV modules and two controllers from the demo catalog. */
+    static Catalog small(Catalog c) {
+        Set<String> inv = Set.of("DEMO-INV-48-5000", "DEMO-INV-48-8000");
+        Set<String> bat = Set.of("DEMO-LFP-48-100", "DEMO-LFP-48-280");
+        Set<String> pvm = Set.of("DEMO-PV-330-60", "DEMO-PV-400-72");
+        Set<String> cc = Set.of("DEMO-MPPT-150-60", "DEMO-MPPT-250-100");
+        return new Catalog("small demo", "test", true, "", c.inverters().stream().filter(i -> inv.contains(i.id())).toList(),
+                c.batteryModules().stream().filter(i -> bat.contains(i.id())).toList(),
+                c.pvModules().stream().filter(i -> pvm.contains(i.id())).toList(),
+                c.chargeControllers().stream().filter(i -> cc.contains(i.id())).toList());
+    }
+
+    /**
+     * The cabin demo with a small catalog, fewer days of autonomy (so the bank the chain asks for cannot carry every
+     * night of the simulated year and the search must trade battery against PV) and a reliability target.
+     */
+    static SizingInput tight(double autonomyDays, double maxUnmetFraction) {
+        SizingInput in = Demos.input(Demos.CABIN);
+        return new SizingInput(in.name(), in.mode(), in.acVoltsRms(), in.frequencyHz(), in.splitPhase(), in.inverterAmbientC(),
+                in.batteryColdestC(), in.inverterMargin(), in.maxBatteryCurrentA(), in.maxParallelRule(), in.chemistry(),
+                in.depthOfDischarge(), in.endOfLife(), in.location(), in.outageHours(), autonomyDays, in.loads(),
+                small(in.catalog()), in.assumptions(), in.warnings(), in.notes(), in.measuredW(), in.profileScale(),
+                in.profileServed(), in.wiring(), maxUnmetFraction, in.batteryDesignC(), in.solar());
+    }
+
+    @Test
+    void theSearchFindsWhatBruteForceFinds() {
+        for (double[] c : new double[][] {{0.5, 0.0}, {0.3, 0.01}}) {
+            SizingInput in = tight(c[0], c[1]);
+            List<Evaluated> all = SystemSearch.bruteForce(in);
+            // Brute force: every candidate simulated, least cost first; the answer is the first that passes, and the
+            // next best are the first passing system of each further family.
+            Map<String, Evaluated> firstOfFamily = new LinkedHashMap<>();
+            for (Evaluated e : all) {
+                if (e.passes()) {
+                    firstOfFamily.putIfAbsent(e.candidate().family(), e);
+                }
+            }
+            List<Evaluated> expected = new ArrayList<>(firstOfFamily.values());
+            assertThat(expected).isNotEmpty();
+            // The reliability target binds: the cheapest system passing the cheap checks fails the simulated year.
+            assertThat(all.get(0).passes()).isFalse();
+            SearchResult s = SystemSearch.run(in, SystemSearch.Options.defaults());
+            assertThat(s.chosen().candidate().pin()).isEqualTo(expected.get(0).candidate().pin());
+            assertThat(s.chosen().candidate().cost()).isEqualTo(expected.get(0).candidate().cost());
+            assertThat(s.chosen().unmetWh()).isCloseTo(expected.get(0).unmetWh(), within(1e-6));
+            int n = Math.min(SystemSearch.DEFAULT_ALTERNATIVES, expected.size() - 1);
+            assertThat(s.alternatives()).hasSize(n);
+            for (int i = 0; i < n; i++) {
+                assertThat(s.alternatives().get(i).candidate().pin()).isEqualTo(expected.get(i + 1).candidate().pin());
+            }
+            // The search simulates far fewer years than brute force.
+            assertThat(s.stats().simulated()).isLessThan(all.size());
+        }
+    }
+
+    @Test
+    void tighteningTheReliabilityTargetNeverLowersTheCost() {
+        double last = 0;
+        for (double f : new double[] {0.10, 0.05, 0.02, 0.01, 0.005, 0.0}) {
+            SearchResult s = SystemSearch.run(tight(0.3, f), SystemSearch.Options.defaults());
+            assertThat(s.chosen()).isNotNull();
+            double cost = s.chosen().candidate().cost();
+            assertThat(cost).as("cost at %s", f).isGreaterThanOrEqualTo(last);
+            assertThat(s.chosen().unmetWh()).isLessThanOrEqualTo(s.unmetLimitWh() + 1e-6);
+            last = cost;
+        }
+    }
+
+    @Test
+    void theChosenSystemPassesEveryCheckWrittenOutInFull() {
+        for (SizingInput in : List.of(tight(0.3, 0.0), tight(0.5, 0.01), Demos.input(Demos.CABIN), Demos.input(Demos.FARM))) {
+            SizingResult r = Sizing.run(in);
+            assertThat(r.search()).isNotNull();
+            assertThat(r.passes()).isTrue();
+            assertThat(r.checks()).isNotEmpty().allSatisfy(c -> assertThat(c.passes()).as(c.label()).isTrue());
+            SystemPin pin = r.search().chosen().candidate().pin();
+            // The full result is the pinned system, and its simulated year is the search's.
+            assertThat(r.inverter().spec().id()).isEqualTo(pin.inverterId());
+            assertThat(r.bank().module().id()).isEqualTo(pin.batteryModuleId());
+            assertThat(r.bank().strings()).isEqualTo(pin.strings());
+            var cand = r.solar().chosen().candidate();
+            assertThat(cand.module().name()).isNotEmpty();
+            assertThat(cand.modulesPerString()).isEqualTo(pin.pv().modulesPerString());
+            assertThat(cand.stringsPerController()).isEqualTo(pin.pv().stringsPerController());
+            assertThat(cand.controllerCount()).isEqualTo(pin.pv().controllers());
+            // One string's output × strings against the whole array's own simulation: the same to rounding.
+            assertThat(r.year().metrics().reliability().unmetWh())
+                    .isCloseTo(r.search().chosen().unmetWh(), within(1e-6 * Math.max(1, r.search().chosen().unmetWh())));
+            double price = r.inverter().spec().price() + r.bank().price() + r.solar().chosen().price();
+            assertThat(r.search().chosen().candidate().cost()).isCloseTo(price, within(1e-9));
+        }
+    }
+
+    @Test
+    void theFrontierIsLeastCostFirstWithLessUnmetEachStep() {
+        SearchResult s = SystemSearch.run(tight(0.3, 0.0), SystemSearch.Options.defaults());
+        List<Evaluated> f = s.frontier();
+        assertThat(f.size()).isGreaterThan(2);
+        for (int i = 1; i < f.size(); i++) {
+            assertThat(f.get(i).candidate().cost()).isGreaterThanOrEqualTo(f.get(i - 1).candidate().cost());
+            assertThat(f.get(i).unmetWh()).isLessThan(f.get(i - 1).unmetWh());
+        }
+        // The chosen system (least cost with nothing unmet) sits on the frontier or a cheaper one with nothing unmet
+        // fails a design check.
+        Evaluated last = f.get(f.size() - 1);
+        assertThat(last.unmetWh()).isLessThanOrEqualTo(1e-6);
+        assertThat(last.candidate().cost()).isLessThanOrEqualTo(s.chosen().candidate().cost());
+        if (last.candidate().cost() < s.chosen().candidate().cost()) {
+            assertThat(last.designNote()).isNotEmpty();
+        }
+    }
+
+    @Test
+    void theLoadGrowthCaseMatchesTheBankByHand() {
+        SizingResult r = Demos.farm();
+        var bank = r.bank();
+        // Usable energy after depth of discharge, temperature, aging and rate, against the chain's DC energy × 1.10.
+        double usable = bank.bankAh() * bank.bankNominalV() * bank.requirement().depthOfDischarge()
+                / (bank.temperatureFactor() * bank.agingFactor() * bank.rateFactor());
+        boolean enough = usable >= 1.10 * r.energy().energyDcWh();
+        SearchResult.Sensitivity load = r.search().sensitivity().get(0);
+        assertThat(load.changePct()).isEqualTo(SystemSearch.DEFAULT_LOAD_GROWTH_PCT);
+        if (!enough) {
+            assertThat(load.passes()).isFalse();
+            assertThat(load.detail()).contains("usable battery energy");
+        }
+        // Off grid the second case is the poorer solar year.
+        assertThat(Demos.cabin().search().sensitivity()).extracting(SearchResult.Sensitivity::label)
+                .containsExactly("Load higher by", "Solar resource lower by");
+    }
+
+    @Test
+    void stoppingEarlyReturnsTheBestFoundSoFar() {
+        SearchResult s = SystemSearch.run(tight(0.3, 0.0), new SystemSearch.Options(3, 10, 10, () -> true, null));
+        assertThat(s.stats().stoppedEarly()).isTrue();
+        assertThat(s.chosen()).isNull();
+        assertThat(s.sensitivity()).isEmpty();
+    }
+}
