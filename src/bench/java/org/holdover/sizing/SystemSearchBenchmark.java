@@ -60,7 +60,7 @@ public class SystemSearchBenchmark {
     @Benchmark
     public double simulateOneCandidate() {
         SystemSearch.Cand c = candidates.get(next++ % candidates.size());
-        return SystemSearch.simulate(cabin, c, batteryTemp, "").unmetWh();
+        return SystemSearch.simulate(cabin, c, batteryTemp, "", SearchResult.Objective.CAPITAL).unmetWh();
     }
 
     /** A batch of candidates on all cores, as the search runs them (one operation = one candidate). */
@@ -71,7 +71,8 @@ public class SystemSearchBenchmark {
         next += BATCH;
         double[] out = new double[BATCH];
         IntStream.range(0, BATCH).parallel().forEach(k ->
-                out[k] = SystemSearch.simulate(cabin, candidates.get((from + k) % candidates.size()), batteryTemp, "").unmetWh());
+                out[k] = SystemSearch.simulate(cabin, candidates.get((from + k) % candidates.size()), batteryTemp, "",
+                        SearchResult.Objective.CAPITAL).unmetWh());
         return out[0];
     }
 

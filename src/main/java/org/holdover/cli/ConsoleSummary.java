@@ -82,11 +82,20 @@ final class ConsoleSummary {
         out.printf(Locale.ROOT, "  search: %,d component checks, %,d systems passing them, %,d simulated years, %,d skipped"
                         + " (a larger system of the family failed)%s%n", st.cheapChecks(), st.candidates(), st.simulated(),
                 st.pruned(), st.stoppedEarly() ? "; STOPPED EARLY: the best system found so far" : "");
+        boolean life = s.objective().lifetime();
+        out.println(life ? String.format(Locale.ROOT, "    objective: lifetime cost over %.0f years at %.1f %% a year (demo prices;"
+                + " battery replaced at the end of its simulated life)", s.objective().horizonYears(), 100 * s.objective().discountRate())
+                : "    objective: capital cost (demo prices; inverter, battery modules, PV modules, controllers)");
+        java.util.List<org.holdover.sizing.SearchResult.Evaluated> rows = new java.util.ArrayList<>();
         if (s.chosen() != null) {
-            out.printf(Locale.ROOT, "    chosen  %,9.0f  %s%n", s.chosen().candidate().cost(), s.chosen().candidate().describe());
+            rows.add(s.chosen());
         }
-        for (var a : s.alternatives()) {
-            out.printf(Locale.ROOT, "    next    %,9.0f  %s%n", a.candidate().cost(), a.candidate().describe());
+        rows.addAll(s.alternatives());
+        for (int i = 0; i < rows.size(); i++) {
+            var e = rows.get(i);
+            out.printf(Locale.ROOT, "    %-7s %,9.0f  %s%s%n", i == 0 && s.chosen() != null ? "chosen" : "next", e.objective(),
+                    e.candidate().describe(), life ? String.format(Locale.ROOT, "; capital %,.0f, battery life %.1f years",
+                            e.candidate().cost(), e.lifeYears()) : "");
         }
         int shown = 0;
         for (var j : s.rejected()) {

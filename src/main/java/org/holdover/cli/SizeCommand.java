@@ -13,9 +13,11 @@ import picocli.CommandLine.Option;
 
 /** Sizes a project and writes the workbook. */
 @Command(name = "size", mixinStandardHelpOptions = true,
-        description = {"Size the system for PROJECT and write the calculation workbook (.xlsx).",
-            "Prints a short summary. Exit code 1 when no system in the catalog passes every check (the workbook is",
-            "still written: it shows why)."})
+        description = {"Search the catalog for the least-cost system that passes every check for PROJECT,",
+            "then write the calculation workbook (.xlsx) and print a short summary with the next best systems.",
+            "Ctrl-C stops the search and keeps the best system found so far.",
+            "Exit code 1 when no system in the catalog passes every check (the workbook is still written: it",
+            "shows why)."})
 final class SizeCommand implements Callable<Integer> {
 
     @Mixin

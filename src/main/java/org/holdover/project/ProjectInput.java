@@ -203,10 +203,13 @@ public record ProjectInput(
      * @param alternatives           next best systems the search shows (default 3)
      * @param loadGrowthPct          load growth the chosen system is tried against, % (default 10)
      * @param poorerSolarPct         shortfall of the solar resource the chosen system is tried against, % (default 10)
+     * @param costHorizonYears       when given, the search minimises the lifetime cost over this many years (battery
+     *                               replacements included) instead of the capital cost
+     * @param discountRatePct        discount rate for the lifetime cost, % per year (default 0)
      */
     public record RulesInput(Double inverterMargin, Double maxBatteryCurrentA, Integer motorsStartingTogether,
                              Integer maxParallelStrings, Double busVoltageV, Double maxUnmetPct, Integer alternatives,
-                             Double loadGrowthPct, Double poorerSolarPct) {
+                             Double loadGrowthPct, Double poorerSolarPct, Double costHorizonYears, Double discountRatePct) {
     }
 
     /**

@@ -129,6 +129,8 @@ public final class ProjectValidator {
             }
             range("rules.loadGrowthPct", p.rules().loadGrowthPct(), 0, 200, "%");
             range("rules.poorerSolarPct", p.rules().poorerSolarPct(), 0, 90, "%");
+            rangeOpenLow("rules.costHorizonYears", p.rules().costHorizonYears(), 0, 100, "years");
+            range("rules.discountRatePct", p.rules().discountRatePct(), 0, 100, "%");
             if (p.rules().maxParallelStrings() != null && (p.rules().maxParallelStrings() < 1 || p.rules().maxParallelStrings() > 64)) {
                 error("rules.maxParallelStrings", "must be 1–64, got " + p.rules().maxParallelStrings(), "");
             }

@@ -66,6 +66,19 @@ final class AlternativesSheet {
         s.input(r++, 3, st.pruned(), Styles.INT);
         s.text(r, 0, "Unmet energy the project accepts over the year, Wh");
         s.input(r++, 3, sr.unmetLimitWh(), Styles.INT);
+        if (sr.objective().lifetime()) {
+            s.text(r, 0, "Objective: lifetime cost over, years");
+            s.input(r, 3, sr.objective().horizonYears(), Styles.D1);
+            s.name("CostHorizonY", r++, 3);
+            s.text(r, 0, "Discount rate per year");
+            s.input(r, 3, sr.objective().discountRate(), Styles.PCT);
+            s.name("DiscountRate", r++, 3);
+            s.text(r++, 0, "Lifetime cost = demo cost + the battery modules bought again each time the bank's life (rainflow"
+                    + " counting of the simulated year, or calendar life) runs out before the horizon, discounted to today.",
+                    ctx.styles.note);
+        } else {
+            s.text(r++, 0, "Objective: least demo capital cost.");
+        }
         if (st.stoppedEarly()) {
             s.text(r++, 0, "STOPPED EARLY by the user: this is the best system found so far, not necessarily the least cost.",
                     ctx.styles.bold);
@@ -77,7 +90,11 @@ final class AlternativesSheet {
             rows.add(sr.chosen());
         }
         rows.addAll(sr.alternatives());
-        s.header(r++, 0, HEAD);
+        s.header(r, 0, HEAD);
+        if (sr.objective().lifetime()) {
+            s.header(r, 24, "Battery life, years", "Lifetime cost");
+        }
+        r++;
         int first = r;
         for (int i = 0; i < rows.size(); i++) {
             row(s, r++, i == 0 && sr.chosen() != null ? "chosen" : "next " + i, rows.get(i), sr);
@@ -170,6 +187,13 @@ final class AlternativesSheet {
             s.input(r, 22, c.lowestMargin(), Styles.PCT);
         }
         s.text(r, 23, e.designNote());
+        if (sr.objective().lifetime() && Double.isFinite(e.lifeYears())) {
+            s.input(r, 24, e.lifeYears(), Styles.D1);
+            String n = "MAX(0,-INT(-(CostHorizonY/Y" + R + "-1E-9))-1)";
+            String q = "(1+DiscountRate)^(-Y" + R + ")";
+            s.formula(r, 25, "S" + R + "+F" + R + "*G" + R + "*IF(" + n + "=0,0,IF(DiscountRate=0," + n + "," + q + "*(1-" + q + "^" + n
+                    + ")/(1-" + q + ")))", e.objective(), Styles.INT);
+        }
     }
 
     private static void chart(SheetWriter s, List<SearchResult.Evaluated> front, int firstRow, int lastRow, int anchorRow) {

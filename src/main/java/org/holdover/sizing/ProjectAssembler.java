@@ -375,6 +375,9 @@ public final class ProjectAssembler {
         int alternatives = r != null && r.alternatives() != null ? r.alternatives() : SystemSearch.DEFAULT_ALTERNATIVES;
         double growth = r != null && r.loadGrowthPct() != null ? r.loadGrowthPct() : SystemSearch.DEFAULT_LOAD_GROWTH_PCT;
         double solar = r != null && r.poorerSolarPct() != null ? r.poorerSolarPct() : SystemSearch.DEFAULT_POORER_SOLAR_PCT;
-        return new SystemSearch.Options(alternatives, growth, solar, cancelled, progress);
+        SearchResult.Objective objective = r != null && r.costHorizonYears() != null
+                ? new SearchResult.Objective(r.costHorizonYears(), r.discountRatePct() == null ? 0 : r.discountRatePct() / 100.0)
+                : SearchResult.Objective.CAPITAL;
+        return new SystemSearch.Options(alternatives, growth, solar, cancelled, progress, objective);
     }
 }

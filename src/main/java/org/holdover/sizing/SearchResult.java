@@ -15,9 +15,11 @@ import java.util.List;
  * @param stats         how much work the search did
  * @param unmetLimitWh  unmet energy the project accepts over the year, Wh
  * @param simulated     whether candidates were checked against a simulated year (not off grid without PV)
+ * @param objective     what the search minimised
  */
 public record SearchResult(Evaluated chosen, List<Evaluated> alternatives, List<Evaluated> frontier, List<Rejection> rejected,
-                           List<Sensitivity> sensitivity, Stats stats, double unmetLimitWh, boolean simulated) {
+                           List<Sensitivity> sensitivity, Stats stats, double unmetLimitWh, boolean simulated,
+                           Objective objective) {
 
     public SearchResult {
         alternatives = List.copyOf(alternatives);
@@ -73,9 +75,11 @@ public record SearchResult(Evaluated chosen, List<Evaluated> alternatives, List<
      * @param lowestSoc   lowest state of charge, fraction (NaN when not simulated)
      * @param passes      passes every check and the simulated year
      * @param designNote  "" for a system that passes the design checks; otherwise which one it fails (frontier only)
+     * @param lifeYears   battery life used for replacements, years (NaN when the objective is capital cost)
+     * @param objective   what the search minimises: the capital cost, or the lifetime cost with replacements
      */
     public record Evaluated(Candidate candidate, double unmetWh, int unmetHours, double lowestSoc, boolean passes,
-                            String designNote) {
+                            String designNote, double lifeYears, double objective) {
     }
 
     /** A family left out and why. */
@@ -111,5 +115,50 @@ public record SearchResult(Evaluated chosen, List<Evaluated> alternatives, List<
 
     static String fmt(double v) {
         return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
+    }
+
+    /**
+     * What the search minimises.
+     *
+     * @param horizonYears  0: the capital cost; otherwise the lifetime cost over this many years: capital + the battery
+     *                      modules bought again each time the bank's life (from the simulated year) runs out before the
+     *                      horizon, each discounted to today
+     * @param discountRate  discount rate per year, fraction
+     */
+    public record Objective(double horizonYears, double discountRate) {
+        public static final Objective CAPITAL = new Objective(0, 0);
+
+        public Objective {
+            if (!(horizonYears >= 0 && horizonYears <= 100) || !(discountRate >= 0 && discountRate <= 1)) {
+                throw new IllegalArgumentException("horizon 0–100 years and discount rate 0–1 expected");
+            }
+        }
+
+        public boolean lifetime() {
+            return horizonYears > 0;
+        }
+
+        /** Replacements before the horizon: ⌈horizon ÷ life⌉ − 1 (none when the life reaches the horizon). */
+        public int replacements(double lifeYears) {
+            if (!lifetime() || !(lifeYears > 0)) {
+                return 0;
+            }
+            return Math.max(0, (int) Math.ceil(horizonYears / lifeYears - 1e-9) - 1);
+        }
+
+        /** Present value of the replacements of a bank costing {@code bankPrice}: Σ price ÷ (1 + r)^(k × life). */
+        public double replacementCost(double bankPrice, double lifeYears) {
+            int n = replacements(lifeYears);
+            double sum = 0;
+            for (int k = 1; k <= n; k++) {
+                sum += bankPrice / Math.pow(1 + discountRate, k * lifeYears);
+            }
+            return sum;
+        }
+
+        /** The objective of a candidate whose battery lasts {@code lifeYears}. */
+        public double of(Candidate c, double lifeYears) {
+            return c.cost() + replacementCost(c.bankModules() * c.bankModulePrice(), lifeYears);
+        }
     }
 }

@@ -84,17 +84,28 @@ public final class SystemSearch {
      * @param progress       progress reports
      */
     public record Options(int alternatives, double loadGrowthPct, double poorerSolarPct, BooleanSupplier cancelled,
-                          Progress progress) {
+                          Progress progress, SearchResult.Objective objective) {
         public Options {
             if (alternatives < 0 || alternatives > 50) {
                 throw new IllegalArgumentException("alternatives must be 0–50");
             }
             cancelled = cancelled == null ? () -> false : cancelled;
             progress = progress == null ? Progress.NONE : progress;
+            objective = objective == null ? SearchResult.Objective.CAPITAL : objective;
+        }
+
+        /** Least capital cost. */
+        public Options(int alternatives, double loadGrowthPct, double poorerSolarPct, BooleanSupplier cancelled,
+                       Progress progress) {
+            this(alternatives, loadGrowthPct, poorerSolarPct, cancelled, progress, SearchResult.Objective.CAPITAL);
         }
 
         public static Options defaults() {
             return new Options(DEFAULT_ALTERNATIVES, DEFAULT_LOAD_GROWTH_PCT, DEFAULT_POORER_SOLAR_PCT, null, null);
+        }
+
+        public Options withObjective(SearchResult.Objective o) {
+            return new Options(alternatives, loadGrowthPct, poorerSolarPct, cancelled, progress, o);
         }
     }
 
@@ -128,41 +139,51 @@ public final class SystemSearch {
         }
     }
 
-    /** A system passing the cheap checks. */
-    record Cand(Group g, BankPart bank, PvPart pv, Candidate candidate) {
+    /**
+     * A system passing the cheap checks, with the least its objective can be: its capital cost, plus, for a lifetime
+     * objective, the replacements its battery would need if it lasted its calendar life (the simulated life is never
+     * longer, and a shorter life never costs less).
+     */
+    record Cand(Group g, BankPart bank, PvPart pv, Candidate candidate, double bound) {
+        Cand withBound(SearchResult.Objective o) {
+            double life = bank.design().module().chemistry().calendarLifeYears();
+            return new Cand(g, bank, pv, candidate, o.of(candidate, life));
+        }
     }
 
     public static SearchResult run(SizingInput in, Options o) {
         long t0 = System.nanoTime();
         Work w = cheap(in);
         double cheapMs = (System.nanoTime() - t0) / 1e6;
-        List<Cand> all = w.candidates;
+        SearchResult.Objective objective = o.objective();
+        List<Cand> all = new ArrayList<>(w.candidates.size());
+        for (Cand c : w.candidates) {
+            all.add(c.withBound(objective));
+        }
         all.sort(ORDER);
         long t1 = System.nanoTime();
         boolean simulate = in.mode() == ProjectInput.Mode.BACKUP || in.solar() != null;
         double[] batteryTemp = new double[in.loads().calendar().hours()];
         java.util.Arrays.fill(batteryTemp, in.batteryDesignC());
         double limitWh = in.maxUnmetFraction() * sum(in.loads().loadW());
-        Evaluated chosen = null;
-        Cand chosenCand = null;
-        List<Evaluated> alternatives = new ArrayList<>();
-        Set<String> represented = new HashSet<>();
+        // The best passing system of each family found so far, with its place in the order (ties go to the earlier).
+        Map<String, Found> best = new LinkedHashMap<>();
         List<Evaluated> simulatedAll = new ArrayList<>();
         Map<String, List<int[]>> failed = new HashMap<>();
         Map<String, Double> leastUnmetOfFamily = new LinkedHashMap<>();
         long simulated = 0;
         long pruned = 0;
         boolean stopped = false;
+        int wanted = 1 + o.alternatives();
         if (simulate) {
             // The largest system of each family and layout first: when it fails, every smaller one fails too.
             Map<String, Cand> corners = new LinkedHashMap<>();
             for (Cand c : all) {
-                corners.merge(domKey(c), c, (x, y) -> x.bank.design().strings() >= y.bank.design().strings()
-                        && sPer(x) >= sPer(y) ? x : corner(x, y));
+                corners.merge(domKey(c), c, SystemSearch::corner);
             }
             List<Cand> tops = new ArrayList<>(corners.values());
             Evaluated[] r = new Evaluated[tops.size()];
-            IntStream.range(0, tops.size()).parallel().forEach(k -> r[k] = simulate(in, tops.get(k), batteryTemp, ""));
+            IntStream.range(0, tops.size()).parallel().forEach(k -> r[k] = simulate(in, tops.get(k), batteryTemp, "", objective));
             simulated += tops.size();
             for (int k = 0; k < tops.size(); k++) {
                 Cand c = tops.get(k);
@@ -174,33 +195,40 @@ public final class SystemSearch {
             }
         }
         int i = 0;
-        while (i < all.size() && (chosen == null || alternatives.size() < o.alternatives())) {
+        while (i < all.size() && !enough(best, wanted, all.get(i).bound)) {
             if (o.cancelled().getAsBoolean()) {
                 stopped = true;
                 break;
             }
             List<Cand> batch = new ArrayList<>();
-            while (i < all.size() && batch.size() < BATCH) {
+            List<Integer> index = new ArrayList<>();
+            while (i < all.size() && batch.size() < BATCH && !enough(best, wanted, all.get(i).bound)) {
                 Cand c = all.get(i++);
-                if (represented.contains(c.candidate.family())) {
-                    continue;
+                Found f = best.get(c.candidate.family());
+                if (f != null && c.bound >= f.e.objective()) {
+                    continue; // this family already has a system at least as good
                 }
                 if (dominated(failed, c)) {
                     pruned++;
                     continue;
                 }
                 batch.add(c);
+                index.add(i - 1);
             }
             if (batch.isEmpty()) {
                 continue;
             }
             Evaluated[] results = new Evaluated[batch.size()];
             if (simulate) {
-                IntStream.range(0, batch.size()).parallel().forEach(k -> results[k] = simulate(in, batch.get(k), batteryTemp, ""));
+                IntStream.range(0, batch.size()).parallel()
+                        .forEach(k -> results[k] = simulate(in, batch.get(k), batteryTemp, "", objective));
                 simulated += batch.size();
             } else {
                 for (int k = 0; k < batch.size(); k++) {
-                    results[k] = new Evaluated(batch.get(k).candidate, Double.NaN, 0, Double.NaN, true, "");
+                    Candidate cand = batch.get(k).candidate;
+                    double life = batch.get(k).bank.design().module().chemistry().calendarLifeYears();
+                    results[k] = new Evaluated(cand, Double.NaN, 0, Double.NaN, true, "",
+                            objective.lifetime() ? life : Double.NaN, objective.of(cand, life));
                 }
             }
             for (int k = 0; k < batch.size(); k++) {
@@ -210,29 +238,31 @@ public final class SystemSearch {
                     simulatedAll.add(e);
                 }
                 String fam = c.candidate.family();
-                if (represented.contains(fam)) {
-                    continue;
-                }
                 if (e.passes()) {
-                    represented.add(fam);
-                    if (chosen == null) {
-                        chosen = e;
-                        chosenCand = c;
-                    } else if (alternatives.size() < o.alternatives()) {
-                        alternatives.add(e);
+                    Found f = best.get(fam);
+                    if (f == null || e.objective() < f.e.objective()) {
+                        best.put(fam, new Found(e, index.get(k)));
                     }
                 } else {
-                    failed.computeIfAbsent(domKey(c), x -> new ArrayList<>()).add(new int[] {c.bank.design().strings(),
-                        c.pv.pin() == null ? 0 : c.pv.pin().stringsPerController()});
+                    failed.computeIfAbsent(domKey(c), x -> new ArrayList<>()).add(new int[] {c.bank.design().strings(), sPer(c)});
                     leastUnmetOfFamily.merge(fam, e.unmetWh(), Math::min);
                 }
             }
             o.progress().report(i, all.size());
         }
         o.progress().report(i, all.size());
+        List<Found> ranked = new ArrayList<>(best.values());
+        ranked.sort(Comparator.comparingDouble((Found f) -> f.e.objective()).thenComparingInt(f -> f.index));
+        Evaluated chosen = ranked.isEmpty() ? null : ranked.get(0).e;
+        Cand chosenCand = ranked.isEmpty() ? null : all.get(ranked.get(0).index);
+        List<Evaluated> alternatives = new ArrayList<>();
+        for (int k = 1; k < ranked.size() && alternatives.size() < o.alternatives(); k++) {
+            alternatives.add(ranked.get(k).e);
+        }
         List<Rejection> rejected = new ArrayList<>(w.rejected);
+        boolean exhausted = !stopped && i >= all.size();
         for (Map.Entry<String, Double> f : leastUnmetOfFamily.entrySet()) {
-            if (!represented.contains(f.getKey()) && !stopped && i >= all.size()) {
+            if (!best.containsKey(f.getKey()) && exhausted) {
                 rejected.add(new Rejection(f.getKey(), String.format(Locale.ROOT,
                         "every size searched leaves more unmet than accepted over the simulated year (least %.0f Wh, accepted %.0f Wh)",
                         f.getValue(), limitWh)));
@@ -241,8 +271,9 @@ public final class SystemSearch {
         List<Evaluated> frontier = new ArrayList<>(simulatedAll);
         List<Sensitivity> sensitivity = new ArrayList<>();
         if (chosenCand != null && simulate && !stopped) {
-            frontier.addAll(smaller(in, chosenCand, batteryTemp));
-            simulated += frontier.size() - simulatedAll.size();
+            List<Evaluated> smaller = smaller(in, chosenCand, batteryTemp);
+            frontier.addAll(smaller);
+            simulated += smaller.size();
         }
         if (chosenCand != null && !stopped) {
             sensitivity.addAll(sensitivity(in, chosenCand, o, batteryTemp, simulate));
@@ -250,27 +281,46 @@ public final class SystemSearch {
         double simMs = (System.nanoTime() - t1) / 1e6;
         SearchResult.Stats stats = new SearchResult.Stats(w.families, w.cheapChecks, all.size(), simulated, pruned, cheapMs, simMs,
                 stopped);
-        return new SearchResult(chosen, alternatives, pareto(frontier), rejected, sensitivity, stats, limitWh, simulate);
+        return new SearchResult(chosen, alternatives, pareto(frontier), rejected, sensitivity, stats, limitWh, simulate, objective);
+    }
+
+    private record Found(Evaluated e, int index) {
+    }
+
+    /** Enough found: {@code wanted} families have a passing system, and no later candidate can beat the last of them. */
+    private static boolean enough(Map<String, Found> best, int wanted, double nextBound) {
+        if (best.size() < wanted) {
+            return false;
+        }
+        double[] values = best.values().stream().mapToDouble(f -> f.e.objective()).sorted().toArray();
+        return nextBound > values[wanted - 1];
     }
 
     /** Every candidate simulated, least cost first (for tests: the search must agree with it). */
-    static List<Evaluated> bruteForce(SizingInput in) {
+    static List<Evaluated> bruteForce(SizingInput in, SearchResult.Objective objective) {
         Work w = cheap(in);
-        List<Cand> all = new ArrayList<>(w.candidates);
+        List<Cand> all = new ArrayList<>();
+        for (Cand c : w.candidates) {
+            all.add(c.withBound(objective));
+        }
         all.sort(ORDER);
         double[] batteryTemp = new double[in.loads().calendar().hours()];
         java.util.Arrays.fill(batteryTemp, in.batteryDesignC());
-        return all.parallelStream().map(c -> simulate(in, c, batteryTemp, "")).toList();
+        return all.parallelStream().map(c -> simulate(in, c, batteryTemp, "", objective)).toList();
     }
 
     /** Every system passing the cheap checks, least cost first (for the benchmark and tests). */
     static List<Cand> candidates(SizingInput in) {
-        List<Cand> all = new ArrayList<>(cheap(in).candidates);
+        List<Cand> all = new ArrayList<>();
+        for (Cand c : cheap(in).candidates) {
+            all.add(c.withBound(SearchResult.Objective.CAPITAL));
+        }
         all.sort(ORDER);
         return all;
     }
 
-    static final Comparator<Cand> ORDER = Comparator.comparingDouble((Cand c) -> c.candidate.cost())
+    static final Comparator<Cand> ORDER = Comparator.comparingDouble((Cand c) -> c.bound)
+            .thenComparingDouble(c -> c.candidate.cost())
             .thenComparingDouble(c -> c.g.busClassV())
             .thenComparing(c -> c.candidate.pin().inverterId())
             .thenComparing(c -> c.candidate.pin().batteryModuleId())
@@ -316,13 +366,14 @@ public final class SystemSearch {
         return false;
     }
 
-    static Evaluated simulate(SizingInput in, Cand c, double[] batteryTemp, String designNote) {
+    static Evaluated simulate(SizingInput in, Cand c, double[] batteryTemp, String designNote, SearchResult.Objective objective) {
         return simulate(in, c.g, c.bank.design(), c.pv, c.pv.pin() == null ? 0 : c.pv.pin().totalStrings(), c.candidate,
-                batteryTemp, designNote, 1.0, 1.0);
+                batteryTemp, designNote, 1.0, 1.0, objective);
     }
 
     private static Evaluated simulate(SizingInput in, Group g, BankDesign bank, PvPart pv, int pvStrings, Candidate cand,
-                                      double[] batteryTemp, String designNote, double loadFactor, double solarFactor) {
+                                      double[] batteryTemp, String designNote, double loadFactor, double solarFactor,
+                                      SearchResult.Objective objective) {
         double[] pvW = pv.seriesW(pvStrings);
         YearCheck.Prepared p = YearCheck.prepare(in, bank, g.inverter().spec().loss(), g.energy(), pvW, pv.efficiency(),
                 pv.limitW(), in.maxUnmetFraction(), batteryTemp);
@@ -341,10 +392,21 @@ public final class SystemSearch {
             p = p.withConditions(cond, load, sun);
             limit = in.maxUnmetFraction() * sum(load);
         }
-        SimulationMetrics m = p.quick();
+        org.holdover.battery.Chemistry chem = bank.module().chemistry();
+        SimulationMetrics m;
+        double life = Double.NaN;
+        if (objective.lifetime()) {
+            double[][] curve = chem.cycleLife();
+            m = p.quick(new org.holdover.sim.AnalysisOptions(List.of(), java.util.Optional.of(new org.holdover.sim.BatteryAging(
+                    new org.holdover.sim.CycleLifeCurve(curve[0], curve[1]), chem.calendarLifeYears()))));
+            life = m.battery().life().map(org.holdover.sim.BatteryLife::lifeYears).orElse(chem.calendarLifeYears());
+        } else {
+            m = p.quick();
+        }
         double unmet = m.reliability().unmetWh();
         boolean passes = designNote.isEmpty() && unmet <= limit + 1e-6;
-        return new Evaluated(cand, unmet, m.reliability().unmetHours(), m.battery().lowestSoc(), passes, designNote);
+        return new Evaluated(cand, unmet, m.reliability().unmetHours(), m.battery().lowestSoc(), passes, designNote, life,
+                objective.of(cand, life));
     }
 
     private record Work(List<Cand> candidates, List<Rejection> rejected, int families, long cheapChecks) {
@@ -457,7 +519,7 @@ public final class SystemSearch {
                 Group g = new Group(cls, a, energy, base, banks, pvs);
                 for (BankPart b : banks) {
                     for (PvPart pv : pvs) {
-                        out.add(new Cand(g, b, pv, candidate(g, b, pv)));
+                        out.add(new Cand(g, b, pv, candidate(g, b, pv), 0));
                     }
                 }
             }
@@ -607,7 +669,8 @@ public final class SystemSearch {
                     stc / 1000.0, Double.NaN);
             String note = notes.isEmpty() ? "a smaller system of the chosen family (its own checks not repeated here)"
                     : String.join("; ", notes);
-            r[j] = simulate(in, c.g, d, pv, pin == null ? 0 : pin.totalStrings(), cand, batteryTemp, note, 1.0, 1.0);
+            r[j] = simulate(in, c.g, d, pv, pin == null ? 0 : pin.totalStrings(), cand, batteryTemp, note, 1.0, 1.0,
+                    SearchResult.Objective.CAPITAL);
         });
         out.addAll(List.of(r));
         return out;
@@ -634,7 +697,7 @@ public final class SystemSearch {
                     usable, needWh));
         }
         Evaluated e = simulate ? simulate(in, c.g, b, c.pv, c.pv.pin() == null ? 0 : c.pv.pin().totalStrings(), c.candidate,
-                batteryTemp, "", 1 + g, 1.0) : null;
+                batteryTemp, "", 1 + g, 1.0, SearchResult.Objective.CAPITAL) : null;
         double limit = in.maxUnmetFraction() * sum(in.loads().loadW()) * (1 + g);
         if (e != null && e.unmetWh() > limit + 1e-6) {
             fails.add(String.format(Locale.ROOT, "the simulated year leaves %.0f Wh unmet", e.unmetWh()));
@@ -645,7 +708,8 @@ public final class SystemSearch {
         if (c.pv.pin() != null) {
             double s = o.poorerSolarPct() / 100.0;
             List<String> sf = new ArrayList<>();
-            Evaluated es = simulate(in, c.g, b, c.pv, c.pv.pin().totalStrings(), c.candidate, batteryTemp, "", 1.0, 1 - s);
+            Evaluated es = simulate(in, c.g, b, c.pv, c.pv.pin().totalStrings(), c.candidate, batteryTemp, "", 1.0, 1 - s,
+                    SearchResult.Objective.CAPITAL);
             double lim = in.maxUnmetFraction() * sum(in.loads().loadW());
             if (es.unmetWh() > lim + 1e-6) {
                 sf.add(String.format(Locale.ROOT, "the simulated year leaves %.0f Wh unmet", es.unmetWh()));

@@ -157,7 +157,12 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
 
         /** The year's metrics after the warm-up year (no life analysis): two simulated years. */
         public SimulationMetrics quick() {
-            return YearSimulation.run(warmed(), conditions, AnalysisOptions.NONE);
+            return quick(AnalysisOptions.NONE);
+        }
+
+        /** As {@link #quick()}, with analyses of the measured year (battery life, for one). */
+        public SimulationMetrics quick(AnalysisOptions options) {
+            return YearSimulation.run(warmed(), conditions, options);
         }
 
         /** The same system with another bank (same conditions). */

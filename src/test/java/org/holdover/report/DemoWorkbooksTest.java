@@ -38,7 +38,8 @@ class DemoWorkbooksTest {
      * another month than the engine did.
      */
     static final List<String> DEMOS = List.of("examples/farm-shop-backup.yaml", "examples/ridge-cabin-offgrid.yaml",
-            "src/main/resources/org/holdover/cli/starter-backup.yaml", "src/main/resources/org/holdover/cli/starter-off-grid.yaml");
+            "src/main/resources/org/holdover/cli/starter-backup.yaml", "src/main/resources/org/holdover/cli/starter-off-grid.yaml",
+            "examples/variants/cabin-lifetime-cost.yaml");
     private final List<Path> workbooks = new ArrayList<>();
 
     @BeforeAll
@@ -46,7 +47,8 @@ class DemoWorkbooksTest {
         Path dir = Artifacts.dir("demo-workbooks");
         for (String demo : DEMOS) {
             Path project = Path.of(demo);
-            SizingResult r = Sizing.run(ProjectAssembler.assemble(ProjectReader.read(project, demo)));
+            var p = ProjectReader.read(project, demo);
+            SizingResult r = Sizing.run(ProjectAssembler.assemble(p), ProjectAssembler.searchOptions(p.input(), null, null));
             assertThat(r.passes()).as(demo + " passes every check").isTrue();
             Path out = dir.resolve(project.getFileName().toString().replace(".yaml", ".xlsx"));
             WorkbookWriter.write(r, out, true);

@@ -47,7 +47,7 @@ class SystemSearchTest {
     void theSearchFindsWhatBruteForceFinds() {
         for (double[] c : new double[][] {{0.5, 0.0}, {0.3, 0.01}}) {
             SizingInput in = tight(c[0], c[1]);
-            List<Evaluated> all = SystemSearch.bruteForce(in);
+            List<Evaluated> all = SystemSearch.bruteForce(in, SearchResult.Objective.CAPITAL);
             // Brute force: every candidate simulated, least cost first; the answer is the first that passes, and the
             // next best are the first passing system of each further family.
             Map<String, Evaluated> firstOfFamily = new LinkedHashMap<>();
@@ -156,5 +156,51 @@ class SystemSearchTest {
         assertThat(s.stats().stoppedEarly()).isTrue();
         assertThat(s.chosen()).isNull();
         assertThat(s.sensitivity()).isEmpty();
+    }
+
+    @Test
+    void replacementsAreDiscountedByHand() {
+        // Present value of a future payment: P ÷ (1 + r)^t (the standard discounting formula; common practice).
+        SearchResult.Objective o = new SearchResult.Objective(25, 0.05);
+        assertThat(o.replacements(15)).isEqualTo(1);    // bought again at 15 years
+        assertThat(o.replacements(10)).isEqualTo(2);    // at 10 and 20 years
+        assertThat(o.replacements(12.5)).isEqualTo(1);  // at 12.5 years; the second would fall on the horizon
+        assertThat(o.replacements(30)).isZero();
+        assertThat(o.replacementCost(1000, 15)).isCloseTo(1000 / 2.0789281794113688, within(1e-9)); // 1.05^15
+        assertThat(o.replacementCost(1000, 10)).isCloseTo(1000 / 1.628894626777442 + 1000 / 2.653297705144422, within(1e-9));
+        assertThat(new SearchResult.Objective(25, 0).replacementCost(1000, 10)).isEqualTo(2000);
+        assertThat(SearchResult.Objective.CAPITAL.replacementCost(1000, 1)).isZero();
+    }
+
+    @Test
+    void theLifetimeObjectiveFindsWhatBruteForceFinds() {
+        SizingInput in = tight(0.5, 0.0);
+        SearchResult.Objective obj = new SearchResult.Objective(25, 0.05);
+        List<Evaluated> all = SystemSearch.bruteForce(in, obj);
+        Evaluated best = null;
+        for (Evaluated e : all) {
+            if (e.passes() && (best == null || e.objective() < best.objective())) {
+                best = e;
+            }
+        }
+        assertThat(best).isNotNull();
+        SearchResult s = SystemSearch.run(in, SystemSearch.Options.defaults().withObjective(obj));
+        assertThat(s.chosen().candidate().pin()).isEqualTo(best.candidate().pin());
+        assertThat(s.chosen().objective()).isCloseTo(best.objective(), within(1e-6));
+        // The chosen system's lifetime cost by hand from its simulated battery life.
+        SearchResult.Candidate c = s.chosen().candidate();
+        double life = s.chosen().lifeYears();
+        assertThat(life).isGreaterThan(0).isLessThanOrEqualTo(15.0 + 1e-9); // LiFePO4 calendar life, from memory
+        double bank = c.bankModules() * c.bankModulePrice();
+        double expected = c.cost();
+        for (int k = 1; k * life < 25 - 1e-9; k++) {
+            expected += bank / Math.pow(1.05, k * life);
+        }
+        assertThat(s.chosen().objective()).isCloseTo(expected, within(1e-6));
+        // Capital cost alone never exceeds the lifetime cost, and the lifetime choice costs no less up front than the
+        // capital choice.
+        SearchResult capital = SystemSearch.run(in, SystemSearch.Options.defaults());
+        assertThat(s.chosen().objective()).isGreaterThanOrEqualTo(c.cost());
+        assertThat(c.cost()).isGreaterThanOrEqualTo(capital.chosen().candidate().cost());
     }
 }
