@@ -63,7 +63,9 @@ public class SystemSearchBenchmark {
         return SystemSearch.simulate(cabin, c, batteryTemp, "", SearchResult.Objective.CAPITAL).unmetWh();
     }
 
-    /** A batch of candidates on all cores, as the search runs them (one operation = one candidate). */
+    private final SystemSearch.Conditions cache = new SystemSearch.Conditions();
+
+    /** A batch of candidates on all cores, as the search runs them, sharing conditions (one operation = one candidate). */
     @Benchmark
     @OperationsPerInvocation(BATCH)
     public double simulateBatchAllCores() {
@@ -72,7 +74,7 @@ public class SystemSearchBenchmark {
         double[] out = new double[BATCH];
         IntStream.range(0, BATCH).parallel().forEach(k ->
                 out[k] = SystemSearch.simulate(cabin, candidates.get((from + k) % candidates.size()), batteryTemp, "",
-                        SearchResult.Objective.CAPITAL).unmetWh());
+                        SearchResult.Objective.CAPITAL, cache).unmetWh());
         return out[0];
     }
 

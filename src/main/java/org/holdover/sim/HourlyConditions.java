@@ -52,6 +52,32 @@ public final class HourlyConditions {
     }
 
     /**
+     * Conditions over arrays shared with the caller, not copied: for a search that simulates many systems over the
+     * same year, where copying every array for every system would cost more than the simulation. The caller must
+     * not change the arrays afterwards. Values are checked as in {@link #offGrid}.
+     *
+     * @param loadW           AC load, W per hour
+     * @param pvArrayW        PV array DC output, W per hour
+     * @param gridAvailable   grid available, per hour
+     * @param chargeForbidden charging forbidden, per hour
+     */
+    public static HourlyConditions sharing(double[] loadW, double[] pvArrayW, boolean[] gridAvailable, boolean[] chargeForbidden) {
+        int n = loadW.length;
+        if (n == 0 || pvArrayW.length != n || gridAvailable.length != n || chargeForbidden.length != n) {
+            throw new IllegalArgumentException("every series must have the same, non-zero length");
+        }
+        for (int t = 0; t < n; t++) {
+            if (!(loadW[t] >= 0) || Double.isInfinite(loadW[t])) {
+                Checks.nonNegative("loadW[" + t + "]", loadW[t]);
+            }
+            if (!(pvArrayW[t] >= 0) || Double.isInfinite(pvArrayW[t])) {
+                Checks.nonNegative("pvArrayW[" + t + "]", pvArrayW[t]);
+            }
+        }
+        return new HourlyConditions(loadW, pvArrayW, chargeForbidden, gridAvailable);
+    }
+
+    /**
      * The same conditions with hours in which the battery must not be charged (for example a LiFePO4 bank
      * below 0 °C; see {@link #chargeForbiddenBelow}).
      *

@@ -175,6 +175,7 @@ public final class SystemSearch {
         long pruned = 0;
         boolean stopped = false;
         int wanted = 1 + o.alternatives();
+        Conditions cache = new Conditions();
         if (simulate) {
             // The largest system of each family and layout first: when it fails, every smaller one fails too.
             Map<String, Cand> corners = new LinkedHashMap<>();
@@ -183,7 +184,8 @@ public final class SystemSearch {
             }
             List<Cand> tops = new ArrayList<>(corners.values());
             Evaluated[] r = new Evaluated[tops.size()];
-            IntStream.range(0, tops.size()).parallel().forEach(k -> r[k] = simulate(in, tops.get(k), batteryTemp, "", objective));
+            IntStream.range(0, tops.size()).parallel()
+                    .forEach(k -> r[k] = simulate(in, tops.get(k), batteryTemp, "", objective, cache));
             simulated += tops.size();
             for (int k = 0; k < tops.size(); k++) {
                 Cand c = tops.get(k);
@@ -221,7 +223,7 @@ public final class SystemSearch {
             Evaluated[] results = new Evaluated[batch.size()];
             if (simulate) {
                 IntStream.range(0, batch.size()).parallel()
-                        .forEach(k -> results[k] = simulate(in, batch.get(k), batteryTemp, "", objective));
+                        .forEach(k -> results[k] = simulate(in, batch.get(k), batteryTemp, "", objective, cache));
                 simulated += batch.size();
             } else {
                 for (int k = 0; k < batch.size(); k++) {
@@ -367,8 +369,33 @@ public final class SystemSearch {
     }
 
     static Evaluated simulate(SizingInput in, Cand c, double[] batteryTemp, String designNote, SearchResult.Objective objective) {
-        return simulate(in, c.g, c.bank.design(), c.pv, c.pv.pin() == null ? 0 : c.pv.pin().totalStrings(), c.candidate,
-                batteryTemp, designNote, 1.0, 1.0, objective);
+        return simulate(in, c, batteryTemp, designNote, objective, null);
+    }
+
+    /**
+     * As above; with a cache, the year (load, grid hours, cold hours) of each inverter and battery module is built
+     * once and shared, not copied, by every system simulated over it.
+     */
+    static Evaluated simulate(SizingInput in, Cand c, double[] batteryTemp, String designNote, SearchResult.Objective objective,
+                              Conditions cache) {
+        int strings = c.pv.pin() == null ? 0 : c.pv.pin().totalStrings();
+        if (cache == null) {
+            return simulate(in, c.g, c.bank.design(), c.pv, strings, c.candidate, batteryTemp, designNote, 1.0, 1.0, objective);
+        }
+        YearCheck.Year y = cache.year(in, c.g, batteryTemp);
+        YearCheck.Prepared p = YearCheck.prepare(y, c.bank.design(), c.g.inverter().spec().loss(), c.pv.seriesW(strings),
+                c.pv.efficiency(), c.pv.limitW());
+        return evaluate(p, c.bank.design(), c.candidate, designNote, y.unmetLimitWh(), objective);
+    }
+
+    /** The shared year of each group (inverter and battery module). */
+    static final class Conditions {
+        private final Map<Group, YearCheck.Year> years = new java.util.IdentityHashMap<>();
+
+        synchronized YearCheck.Year year(SizingInput in, Group g, double[] batteryTemp) {
+            return years.computeIfAbsent(g, x -> YearCheck.year(in, g.base().module().chemistry(), g.energy(), in.maxUnmetFraction(),
+                    batteryTemp));
+        }
     }
 
     private static Evaluated simulate(SizingInput in, Group g, BankDesign bank, PvPart pv, int pvStrings, Candidate cand,
@@ -392,6 +419,11 @@ public final class SystemSearch {
             p = p.withConditions(cond, load, sun);
             limit = in.maxUnmetFraction() * sum(load);
         }
+        return evaluate(p, bank, cand, designNote, limit, objective);
+    }
+
+    private static Evaluated evaluate(YearCheck.Prepared p, BankDesign bank, Candidate cand, String designNote, double limit,
+                                      SearchResult.Objective objective) {
         org.holdover.battery.Chemistry chem = bank.module().chemistry();
         SimulationMetrics m;
         double life = Double.NaN;

@@ -165,10 +165,16 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
             return YearSimulation.run(warmed(), conditions, options);
         }
 
-        /** The same system with another bank (same conditions). */
-        public Prepared withBank(BatteryBank bank) {
-            return new Prepared(design.withBattery(bank), conditions, loadW, pvArrayW, gridAvailable, chargeForbidden,
-                    unmetLimitWh);
+        /**
+         * The same system and conditions with another bank design: the bank as simulated and, in backup, the grid
+         * charger sized from its charging limit, exactly as {@link #prepare} builds them.
+         */
+        public Prepared withBankDesign(BankDesign d) {
+            BatteryBank bank = bank(d);
+            Charger charger = design.charger().maxAcInputW() > 0
+                    ? new Charger(bank.maxChargeW() / GRID_CHARGER_EFFICIENCY, GRID_CHARGER_EFFICIENCY) : Charger.NONE;
+            return new Prepared(new SystemDesign(design.controller(), design.inverter(), bank, charger, design.generator()),
+                    conditions, loadW, pvArrayW, gridAvailable, chargeForbidden, unmetLimitWh);
         }
 
         /** The same system under other conditions (load or PV scaled for a sensitivity case). */
@@ -186,6 +192,52 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
         double maxCharge = bankDesign.strings() * m.maxChargeA() * bankDesign.bankNominalV();
         double maxDischarge = bankDesign.strings() * m.maxContinuousA() * bankDesign.bankNominalV();
         return new BatteryBank(nominal, floor, 1.0, 1.0, c.roundTripEfficiency(), 1.0, maxCharge, maxDischarge);
+    }
+
+    /**
+     * The year a system is simulated over, apart from its PV: the served load, the grid hours, the hours the bank may
+     * not be charged and the unmet energy accepted. Its arrays are shared by every {@link #prepare(Year, BankDesign,
+     * LossModel, double[], double, double)} built on it and must not be changed.
+     */
+    public record Year(double[] loadW, boolean[] gridAvailable, boolean[] chargeForbidden, double unmetLimitWh, boolean backup) {
+    }
+
+    /** The year of a project for banks of one chemistry (the cold-charging limit is the chemistry's). */
+    public static Year year(SizingInput in, Chemistry c, EnergyBasis energy, double unmetLimitFraction, double[] batteryTempC) {
+        LoadAnalysis la = in.loads();
+        int n = la.calendar().hours();
+        boolean backup = in.mode() == ProjectInput.Mode.BACKUP;
+        boolean[] grid = new boolean[n];
+        if (backup) {
+            Arrays.fill(grid, true);
+            for (int h = energy.windowStartHour(); h < energy.windowStartHour() + energy.windowHours(); h++) {
+                grid[h] = false;
+            }
+        }
+        // A chemistry without a cold-charging limit (lead-acid: −∞) is never stopped from charging.
+        boolean[] forbidden = batteryTempC == null || !Double.isFinite(c.noChargeBelowC()) ? new boolean[n]
+                : HourlyConditions.chargeForbiddenBelow(batteryTempC, c.noChargeBelowC());
+        double[] load = la.loadW().clone();
+        return new Year(load, grid, forbidden, unmetLimitFraction * sum(load), backup);
+    }
+
+    /**
+     * A system over a shared year (no copies: the search's path). The same design as
+     * {@link #prepare(SizingInput, BankDesign, LossModel, EnergyBasis, double[], double, double, double, double[])}.
+     *
+     * @param pvArrayW the PV array's DC output each hour (kept, not copied), or null without PV
+     */
+    public static Prepared prepare(Year y, BankDesign bankDesign, LossModel loss, double[] pvArrayW, double controllerEfficiency,
+                                   double controllerLimitW) {
+        BatteryBank first = bank(bankDesign);
+        InverterLossModel inv = new InverterLossModel(loss.ratedW(), loss.p0(), loss.k1(), loss.k2());
+        ChargeController cc = new ChargeController(controllerEfficiency, controllerLimitW);
+        Charger charger = y.backup() ? new Charger(first.maxChargeW() / GRID_CHARGER_EFFICIENCY, GRID_CHARGER_EFFICIENCY)
+                : Charger.NONE;
+        double[] pv = pvArrayW == null ? new double[y.loadW().length] : pvArrayW;
+        HourlyConditions cond = HourlyConditions.sharing(y.loadW(), pv, y.gridAvailable(), y.chargeForbidden());
+        SystemDesign design = new SystemDesign(cc, inv, first, charger, java.util.Optional.empty());
+        return new Prepared(design, cond, y.loadW(), pv, y.gridAvailable(), y.chargeForbidden(), y.unmetLimitWh());
     }
 
     /** See {@link #run}; the same system, ready to simulate. */
