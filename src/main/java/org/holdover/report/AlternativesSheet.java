@@ -57,22 +57,22 @@ final class AlternativesSheet {
         }
         var st = sr.stats();
         s.text(r, 0, "Component checks evaluated");
-        s.input(r++, 3, st.cheapChecks(), Styles.INT);
+        s.input(r++, 4, st.cheapChecks(), Styles.INT);
         s.text(r, 0, "Whole systems passing every component check");
-        s.input(r++, 3, st.candidates(), Styles.INT);
+        s.input(r++, 4, st.candidates(), Styles.INT);
         s.text(r, 0, "Years simulated");
-        s.input(r++, 3, st.simulated(), Styles.INT);
+        s.input(r++, 4, st.simulated(), Styles.INT);
         s.text(r, 0, "Skipped: a larger system of the same family had already failed");
-        s.input(r++, 3, st.pruned(), Styles.INT);
+        s.input(r++, 4, st.pruned(), Styles.INT);
         s.text(r, 0, "Unmet energy the project accepts over the year, Wh");
-        s.input(r++, 3, sr.unmetLimitWh(), Styles.INT);
+        s.input(r++, 4, sr.unmetLimitWh(), Styles.INT);
         if (sr.objective().lifetime()) {
             s.text(r, 0, "Objective: lifetime cost over, years");
-            s.input(r, 3, sr.objective().horizonYears(), Styles.D1);
-            s.name("CostHorizonY", r++, 3);
+            s.input(r, 4, sr.objective().horizonYears(), Styles.D1);
+            s.name("CostHorizonY", r++, 4);
             s.text(r, 0, "Discount rate per year");
-            s.input(r, 3, sr.objective().discountRate(), Styles.PCT);
-            s.name("DiscountRate", r++, 3);
+            s.input(r, 4, sr.objective().discountRate(), Styles.PCT);
+            s.name("DiscountRate", r++, 4);
             s.text(r++, 0, "Lifetime cost = demo cost + the battery modules bought again each time the bank's life (rainflow"
                     + " counting of the simulated year, or calendar life) runs out before the horizon, discounted to today.",
                     ctx.styles.note);
@@ -90,9 +90,9 @@ final class AlternativesSheet {
             rows.add(sr.chosen());
         }
         rows.addAll(sr.alternatives());
-        s.header(r, 0, HEAD);
+        wrappedHeader(ctx, s, r, 0, HEAD);
         if (sr.objective().lifetime()) {
-            s.header(r, 24, "Battery life, years", "Lifetime cost");
+            wrappedHeader(ctx, s, r, 24, "Battery life, years", "Lifetime cost");
         }
         r++;
         int first = r;
@@ -106,7 +106,7 @@ final class AlternativesSheet {
         s.text(r++, 0, "Cost against unmet energy: simulated systems no cheaper one beats on unmet energy", ctx.styles.subtitle);
         s.text(r++, 0, "Rows with a note fail a design check (too little battery for the outage or the autonomy, too little PV for"
                 + " the worst month): they show what the design checks buy, they are not offers.", ctx.styles.note);
-        s.header(r++, 0, HEAD);
+        wrappedHeader(ctx, s, r++, 0, HEAD);
         int frontFirst = r;
         for (SearchResult.Evaluated e : sr.frontier()) {
             row(s, r++, e.passes() ? "passes" : e.designNote().isEmpty() ? "fails the simulated year" : "fails a design check", e, sr);
@@ -138,18 +138,31 @@ final class AlternativesSheet {
             s.text(r, 0, j.family());
             s.text(r++, 5, j.reason());
         }
-        s.sheet.setColumnWidth(0, 24 * 256);
-        for (int c = 1; c < HEAD.length - 1; c++) {
-            s.sheet.setColumnWidth(c, 13 * 256);
+        s.sheet.setColumnWidth(0, 22 * 256);
+        for (int c = 1; c < HEAD.length + 2; c++) {
+            s.sheet.setColumnWidth(c, 9 * 256);
         }
-        s.sheet.setColumnWidth(2, 20 * 256);
-        s.sheet.setColumnWidth(4, 20 * 256);
-        s.sheet.setColumnWidth(9, 20 * 256);
-        s.sheet.setColumnWidth(15, 20 * 256);
-        s.sheet.setColumnWidth(HEAD.length - 1, 60 * 256);
+        for (int c : new int[] {2, 4, 9, 15}) {
+            s.sheet.setColumnWidth(c, 17 * 256);
+        }
+        s.sheet.setColumnWidth(HEAD.length - 1, 44 * 256);
+
         if (first > 0 && sr.chosen() != null) {
             s.name("SearchChosenCost", first, COST);
         }
+    }
+
+    /** A header row whose labels wrap onto up to three lines (the columns are narrow). */
+    private static void wrappedHeader(Context ctx, SheetWriter s, int r, int c, String... labels) {
+        s.header(r, c, labels);
+        org.apache.poi.ss.usermodel.CellStyle h = ctx.wb.createCellStyle();
+        h.cloneStyleFrom(ctx.styles.header);
+        h.setWrapText(true);
+        h.setVerticalAlignment(org.apache.poi.ss.usermodel.VerticalAlignment.TOP);
+        for (int i = 0; i < labels.length; i++) {
+            s.cell(r, c + i).setCellStyle(h);
+        }
+        s.sheet.getRow(r).setHeightInPoints(3 * 13f);
     }
 
     private static void row(SheetWriter s, int r, String label, SearchResult.Evaluated e, SearchResult sr) {

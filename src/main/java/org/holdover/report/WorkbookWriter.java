@@ -118,7 +118,7 @@ public final class WorkbookWriter {
             s.setFitToPage(true);
             s.setAutobreaks(true);
             PrintSetup p = s.getPrintSetup();
-            p.setFitWidth((short) 1);
+            p.setFitWidth((short) (name.equals(Context.ALTERNATIVES) ? 2 : 1));
             p.setFitHeight((short) 0);
             p.setLandscape(!name.equals(Context.CAUTIONS));
             p.setPaperSize(a4 ? PrintSetup.A4_PAPERSIZE : PrintSetup.LETTER_PAPERSIZE);
