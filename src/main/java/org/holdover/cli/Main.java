@@ -23,6 +23,8 @@ public final class Main implements Runnable {
     public static final int FAILS_CHECKS = 1;
     public static final int BAD_INPUT = 2;
     public static final int INTERNAL = 3;
+    /** Stopped by the user (Ctrl-C) before the search found any system: nothing written (128 + SIGINT). */
+    public static final int STOPPED = 130;
 
     @CommandLine.Spec
     CommandLine.Model.CommandSpec spec;

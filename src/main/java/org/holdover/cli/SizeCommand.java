@@ -37,6 +37,11 @@ final class SizeCommand implements Callable<Integer> {
     public Integer call() throws Exception {
         try {
             SizingResult r = common.size();
+            if (r.search() != null && r.search().stats().stoppedEarly() && r.chosen() == null) {
+                spec.commandLine().getErr().println("holdover: stopped before the search found a system; nothing written");
+                spec.commandLine().getErr().flush();
+                return Main.STOPPED;
+            }
             Path target = output != null ? output : defaultOutput(common.project);
             PrintWriter out = spec.commandLine().getOut();
             try {
