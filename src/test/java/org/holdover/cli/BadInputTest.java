@@ -87,7 +87,13 @@ class BadInputTest {
                 c("huge number", BASE.replace("watts: 120", "watts: 1e300"), "above the 1,000,000 W limit"),
                 c("zero power factor", BASE.replace("powerFactor: 0.75", "powerFactor: 0"),
                         "loads.appliances[0].powerFactor: must be greater than 0 and at most 1, got 0"),
-                c("the whole file is a list", "- 1\n- 2\n", "expected a project (a mapping of fields), got a list"));
+                c("the whole file is a list", "- 1\n- 2\n", "expected a project (a mapping of fields), got a list"),
+                c("too many alternatives", BASE + "rules: { alternatives: 99 }\n", "rules.alternatives: must be 0–20, got 99"),
+                c("negative load growth", BASE + "rules: { loadGrowthPct: -5 }\n", "rules.loadGrowthPct: must be 0–200 %, got -5"),
+                c("zero cost horizon", BASE + "rules: { costHorizonYears: 0 }\n",
+                        "rules.costHorizonYears: must be greater than 0 years and at most 100 years, got 0"),
+                c("misspelt search rule", BASE + "rules: { alternatves: 2 }\n",
+                        "rules.alternatves: unknown field \"alternatves\"; did you mean \"alternatives\"?"));
     }
 
     private static Arguments c(String name, String text, String expected) {
