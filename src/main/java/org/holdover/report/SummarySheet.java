@@ -141,7 +141,20 @@ final class SummarySheet {
         int invRow = InvertersSheet.FIRST + r.inverters().indexOf(r.inverter());
         s.formula(row++, 1, ctx.sheet(Context.INVERTERS).ref(invRow, InvertersSheet.PRICE) + "+" + bat.ref(bankRow, BatterySheet.COST),
                 r.inverter().spec().price() + b.price(), Styles.INT);
-        return PvSheet.summary(ctx, s, row);
+        row = PvSheet.summary(ctx, s, row);
+        if (r.search() != null && r.search().chosen() != null) {
+            var st = r.search().stats();
+            s.text(row, 0, "How it was chosen");
+            s.sheet.getRow(row).setHeightInPoints(3 * 15f);
+            side(ctx, s, row++, String.format(java.util.Locale.ROOT, "the least %s of %,d systems passing every component check"
+                            + " (%,d years simulated), with the next best, the cost-against-unmet frontier and the families left"
+                            + " out on the Alternatives sheet%s",
+                    r.search().objective().lifetime() ? "lifetime cost" : "demo capital cost", st.candidates(), st.simulated(),
+                    st.stoppedEarly() ? "; STOPPED EARLY by the user: the best found so far" : ""));
+            s.text(row, 0, "Demo cost of the whole system (Alternatives sheet)");
+            s.formula(row++, 1, "SearchChosenCost", r.search().chosen().candidate().cost(), Styles.INT);
+        }
+        return row;
     }
 
     private static int ref(SheetWriter s, int row, String label, String name, double value, String unit, String format) {
