@@ -448,6 +448,7 @@ public final class SystemSearch {
     private static Work cheap(SizingInput in) {
         List<Rejection> rejected = new ArrayList<>();
         List<Cand> out = new ArrayList<>();
+        List<Pending> pending = new ArrayList<>();
         long checks = 0;
         int families = 0;
         TreeSet<Double> classes = new TreeSet<>();
@@ -520,39 +521,24 @@ public final class SystemSearch {
                             + " passes: " + last));
                     continue;
                 }
-                List<PvPart> pvs = new ArrayList<>();
-                if (in.solar() == null) {
-                    pvs.add(PvPart.NONE);
-                    families++;
-                } else {
-                    BusOption stub = new BusOption(cls, a, current, energy.energyDcWh(), List.of(), base, true, "");
-                    PvSizing.Pairs pairs = PvSizing.pairs(in, stub, energy);
-                    if (pairs.failure() != null) {
-                        rejected.add(new Rejection(bankFamily, pairs.failure().reason()));
-                        continue;
-                    }
-                    for (PvSizing.Pair pair : pairs.pairs()) {
-                        families++;
-                        String pvFamily = bankFamily + ", " + pair.mi().id() + " on " + pair.ci().id();
-                        PvOption own = pair.option();
-                        checks++;
-                        if (!own.passes()) {
-                            rejected.add(new Rejection(pvFamily, failure(own.firstFailure())));
-                            continue;
-                        }
-                        Layouts l = layouts(in, pair, own);
-                        checks += l.checked;
-                        if (l.parts.isEmpty()) {
-                            rejected.add(new Rejection(pvFamily, "no layout passes: " + l.last));
-                        }
-                        pvs.addAll(l.parts);
-                    }
-                }
-                Group g = new Group(cls, a, energy, base, banks, pvs);
-                for (BankPart b : banks) {
-                    for (PvPart pv : pvs) {
-                        out.add(new Cand(g, b, pv, candidate(g, b, pv), 0));
-                    }
+                pending.add(new Pending(cls, a, current, energy, base, banks, bankFamily));
+            }
+        }
+        // The PV layouts of each inverter and module, on all cores (each is independent); gathered in order.
+        List<PvWork> pv = pending.parallelStream().map(x -> pvWork(in, x)).toList();
+        for (int k = 0; k < pending.size(); k++) {
+            Pending x = pending.get(k);
+            PvWork w = pv.get(k);
+            rejected.addAll(w.rejected);
+            checks += w.checks;
+            families += w.families;
+            if (w.parts.isEmpty()) {
+                continue;
+            }
+            Group g = new Group(x.cls, x.a, x.energy, x.base, x.banks, w.parts);
+            for (BankPart b : x.banks) {
+                for (PvPart part : w.parts) {
+                    out.add(new Cand(g, b, part, candidate(g, b, part), 0));
                 }
             }
         }
@@ -560,6 +546,47 @@ public final class SystemSearch {
     }
 
     private record Layouts(List<PvPart> parts, long checked, String last) {
+    }
+
+    /** An inverter and battery module whose banks pass, waiting for its PV layouts. */
+    private record Pending(double cls, InverterAssessment a, Check current, EnergyBasis energy, BankDesign base,
+                           List<BankPart> banks, String bankFamily) {
+    }
+
+    private record PvWork(List<PvPart> parts, List<Rejection> rejected, long checks, int families) {
+    }
+
+    private static PvWork pvWork(SizingInput in, Pending x) {
+        List<Rejection> rejected = new ArrayList<>();
+        if (in.solar() == null) {
+            return new PvWork(List.of(PvPart.NONE), rejected, 0, 1);
+        }
+        List<PvPart> pvs = new ArrayList<>();
+        long checks = 0;
+        int families = 0;
+        BusOption stub = new BusOption(x.cls, x.a, x.current, x.energy.energyDcWh(), List.of(), x.base, true, "");
+        PvSizing.Pairs pairs = PvSizing.pairs(in, stub, x.energy);
+        if (pairs.failure() != null) {
+            rejected.add(new Rejection(x.bankFamily, pairs.failure().reason()));
+            return new PvWork(pvs, rejected, checks, families);
+        }
+        for (PvSizing.Pair pair : pairs.pairs()) {
+            families++;
+            String pvFamily = x.bankFamily + ", " + pair.mi().id() + " on " + pair.ci().id();
+            PvOption own = pair.option();
+            checks++;
+            if (!own.passes()) {
+                rejected.add(new Rejection(pvFamily, failure(own.firstFailure())));
+                continue;
+            }
+            Layouts l = layouts(in, pair, own);
+            checks += l.checked;
+            if (l.parts.isEmpty()) {
+                rejected.add(new Rejection(pvFamily, "no layout passes: " + l.last));
+            }
+            pvs.addAll(l.parts);
+        }
+        return new PvWork(pvs, rejected, checks, families);
     }
 
     /** Every layout of a module and controller pair from what the sizing asks for to the most searched. */
