@@ -21,6 +21,13 @@ public record SearchResult(Evaluated chosen, List<Evaluated> alternatives, List<
                            List<Sensitivity> sensitivity, Stats stats, double unmetLimitWh, boolean simulated,
                            Objective objective) {
 
+    /** Whether the search may have added a generator (a generator's id appears in some family). */
+    public boolean generatorsSearched() {
+        return java.util.stream.Stream.concat(java.util.stream.Stream.concat(java.util.stream.Stream.ofNullable(chosen),
+                alternatives.stream()), frontier.stream()).anyMatch(e -> e.candidate().pin().generatorId() != null)
+                || rejected.stream().anyMatch(r -> r.family().contains(", generator "));
+    }
+
     public SearchResult {
         alternatives = List.copyOf(alternatives);
         frontier = List.copyOf(frontier);
