@@ -33,7 +33,9 @@ import org.holdover.sizing.SearchResult.Sensitivity;
  * <p>Candidates are every combination the catalog allows: bus class × inverter × battery module × parallel strings
  * (from what the battery sizing asks for up to the most allowed) × PV module × charge controller × modules per
  * string × strings × controllers (from what the PV sizing asks for up to {@value #EXTRA_PV_SHARE} more, at least
- * {@value #EXTRA_PV_MIN} more strings). The design requirements stay hard checks: the bank covers the outage or the
+ * {@value #EXTRA_PV_MIN} more strings) × generator (none, or, when the project allows one, each catalog set that suits the
+ * service and covers the charger and the running loads; with a generator, PV layouts from one string up, since the
+ * generator may cover what a smaller array leaves short: the worst-month PV checks do not reject those systems). The design requirements stay hard checks: the bank covers the outage or the
  * days of autonomy after its derating, the array refills it in the worst month, every voltage, current, conductor
  * and motor-start check passes.
  *
@@ -45,7 +47,8 @@ import org.holdover.sizing.SearchResult.Sensitivity;
  *       over the year in that order, in batches across all cores; the first that leaves no more unmet energy than
  *       the project accepts is the least-cost system. A system is not simulated when a larger one of the same family
  *       (as many or more battery strings and PV strings, same parts otherwise) already failed: more battery and more
- *       PV never leave more unmet (the simulation's property tests check this).</li>
+ *       PV never leave more unmet (the simulation's property tests check this). Systems with a generator are never
+ *       skipped this way (see {@code dominated}).</li>
  *   <li>The search goes on until the next best systems of other families are found, then simulates smaller systems
  *       of the chosen family (fewer strings than the design checks allow) for the cost-versus-unmet frontier, and the
  *       chosen system under more load and a poorer solar year.</li>
