@@ -13,10 +13,41 @@ import java.util.List;
  * @param batteryModules battery modules
  * @param pvModules      PV modules (optional; needed when a project has a solar section)
  * @param chargeControllers solar charge controllers (optional; needed when a project has a solar section)
+ * @param generators     engine generators (optional; the system search may add one when the project allows it)
  */
 public record CatalogFile(String name, Boolean demoData, String note, List<InverterEntry> inverters,
                           List<ModuleEntry> batteryModules, List<PvModuleEntry> pvModules,
-                          List<ControllerEntry> chargeControllers) {
+                          List<ControllerEntry> chargeControllers, List<GeneratorEntry> generators) {
+
+    /**
+     * An engine generator.
+     *
+     * @param id           identifier, unique in the catalog
+     * @param description  plain description
+     * @param ratedW       continuous nameplate rating at sea level, real power, W
+     * @param ac           AC output (voltsRms, frequenciesHz, splitPhase as for inverters)
+     * @param minLoadRatio smallest output while running, fraction of the rating (0–1)
+     * @param fuel         fuel curve: the linear form, or two measured points
+     * @param price        demo price
+     */
+    public record GeneratorEntry(String id, String description, Double ratedW, AcEntry ac, Double minLoadRatio,
+                                 FuelEntry fuel, Double price) {
+    }
+
+    /**
+     * Fuel use of a running set: either the linear form {@code L/h = noLoad × rated kW + slope × output kW}
+     * (both coefficients), or {@code points}: two rows of a fuel table, fitted to that line.
+     *
+     * @param noLoadLPerHPerRatedKw fuel at no load per kW of rating, L/h/kW
+     * @param slopeLPerKwh          added fuel per kWh of output, L/kWh
+     * @param points                two measured points instead of the coefficients
+     */
+    public record FuelEntry(Double noLoadLPerHPerRatedKw, Double slopeLPerKwh, List<FuelPointEntry> points) {
+    }
+
+    /** @param outputW electrical output, W; @param litresPerHour fuel rate at that output, L/h */
+    public record FuelPointEntry(Double outputW, Double litresPerHour) {
+    }
 
     /**
      * @param id                 identifier, unique in the catalog

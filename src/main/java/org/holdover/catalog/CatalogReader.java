@@ -17,6 +17,10 @@ import org.holdover.battery.Chemistry;
 import org.holdover.catalog.CatalogFile.EfficiencyEntry;
 import org.holdover.catalog.CatalogFile.InverterEntry;
 import org.holdover.catalog.CatalogFile.ControllerEntry;
+import org.holdover.catalog.CatalogFile.FuelEntry;
+import org.holdover.catalog.CatalogFile.FuelPointEntry;
+import org.holdover.catalog.CatalogFile.GeneratorEntry;
+import org.holdover.sim.FuelCurve;
 import org.holdover.catalog.CatalogFile.ModuleEntry;
 import org.holdover.catalog.CatalogFile.PvModuleEntry;
 import org.holdover.catalog.CatalogFile.SurgeEntry;
@@ -116,6 +120,15 @@ public final class CatalogReader {
                 }
             }
         }
+        List<GeneratorItem> generators = new ArrayList<>();
+        if (f.generators() != null) {
+            for (int i = 0; i < f.generators().size(); i++) {
+                GeneratorItem g = generator(f.generators().get(i), "generators[" + i + "]", ids);
+                if (g != null) {
+                    generators.add(g);
+                }
+            }
+        }
         if (problems.isEmpty() && inverters.isEmpty()) {
             problem("inverters", "the catalog has no inverters", "list at least one");
         }
@@ -126,7 +139,121 @@ public final class CatalogReader {
             throw new InputException(problems);
         }
         return new Catalog(f.name(), display, Boolean.TRUE.equals(f.demoData()), f.note() == null ? "" : f.note(),
-                inverters, modules, pvModules, controllers);
+                inverters, modules, pvModules, controllers, generators);
+    }
+
+    /** Largest generator rating accepted, W (a plausibility bound for a set on a house or farm system). */
+    static final double MAX_GENERATOR_W = 1e6;
+    /** Largest fuel coefficient accepted (L/h per rated kW, or L/kWh): diesel sets are near 0.08 and 0.25. */
+    static final double MAX_FUEL_COEFFICIENT = 2.0;
+
+    private GeneratorItem generator(GeneratorEntry e, String p, Set<String> ids) {
+        if (e == null) {
+            problem(p, "is empty", "");
+            return null;
+        }
+        int before = problems.size();
+        String id = id(e.id(), p, ids);
+        Double rated = positive(p + ".ratedW", e.ratedW(), MAX_GENERATOR_W);
+        AcOutput ac = null;
+        if (e.ac() == null) {
+            problem(p + ".ac", "is missing", "give voltsRms, frequenciesHz and splitPhase");
+        } else {
+            Double v = positive(p + ".ac.voltsRms", e.ac().voltsRms(), 1000);
+            List<Double> freqs = e.ac().frequenciesHz();
+            boolean freqOk = true;
+            if (freqs == null || freqs.isEmpty()) {
+                problem(p + ".ac.frequenciesHz", "is missing", "e.g. [60] or [50]");
+                freqOk = false;
+            } else {
+                for (int i = 0; i < freqs.size(); i++) {
+                    Double fq = freqs.get(i);
+                    if (fq == null || fq != 50.0 && fq != 60.0) {
+                        problem(p + ".ac.frequenciesHz[" + i + "]", "must be 50 or 60, got " + fq, "");
+                        freqOk = false;
+                    }
+                }
+            }
+            boolean split = Boolean.TRUE.equals(e.ac().splitPhase());
+            if (split && v != null && v != 240.0) {
+                problem(p + ".ac.voltsRms", "a split-phase set is 120/240 V, got " + fmt(v) + " V", "voltsRms: 240");
+            } else if (v != null && freqOk) {
+                ac = new AcOutput(v, freqs, split);
+            }
+        }
+        Double minLoad = null;
+        if (e.minLoadRatio() == null) {
+            problem(p + ".minLoadRatio", "is missing", "the smallest load while running as a fraction of the rating, e.g. 0.3");
+        } else if (!(e.minLoadRatio() >= 0 && e.minLoadRatio() < 1)) {
+            problem(p + ".minLoadRatio", "must be 0 or more and below 1, got " + e.minLoadRatio(),
+                    "a fraction of the rating, e.g. 0.3");
+        } else {
+            minLoad = e.minLoadRatio();
+        }
+        FuelCurve fuel = fuel(e.fuel(), p + ".fuel", rated);
+        Double price = nonNegative(p + ".price", e.price(), 1e8);
+        if (problems.size() > before || id == null || rated == null || ac == null || minLoad == null || fuel == null
+                || price == null) {
+            return null;
+        }
+        return new GeneratorItem(id, e.description() == null ? id : e.description(), rated, ac, minLoad, fuel, price);
+    }
+
+    /** The fuel curve: both coefficients, or two points fitted to the line; null (with problems) when bad. */
+    private FuelCurve fuel(FuelEntry f, String p, Double ratedW) {
+        String expected = "either noLoadLPerHPerRatedKw and slopeLPerKwh, or points: two { outputW, litresPerHour }";
+        if (f == null) {
+            problem(p, "is missing", expected);
+            return null;
+        }
+        boolean coefficients = f.noLoadLPerHPerRatedKw() != null || f.slopeLPerKwh() != null;
+        if (coefficients && f.points() != null) {
+            problem(p, "gives both the coefficients and points", expected);
+            return null;
+        }
+        if (coefficients) {
+            Double f0 = nonNegative(p + ".noLoadLPerHPerRatedKw", f.noLoadLPerHPerRatedKw(), MAX_FUEL_COEFFICIENT);
+            Double f1 = nonNegative(p + ".slopeLPerKwh", f.slopeLPerKwh(), MAX_FUEL_COEFFICIENT);
+            return f0 == null || f1 == null ? null : new FuelCurve(f0, f1);
+        }
+        if (f.points() == null || f.points().size() != 2) {
+            problem(p + ".points", f.points() == null ? "is missing" : "lists " + f.points().size() + " points", expected);
+            return null;
+        }
+        int before = problems.size();
+        double[] w = new double[2];
+        double[] l = new double[2];
+        for (int i = 0; i < 2; i++) {
+            String pp = p + ".points[" + i + "]";
+            FuelPointEntry e = f.points().get(i);
+            if (e == null) {
+                problem(pp, "is empty", "{ outputW, litresPerHour }");
+                continue;
+            }
+            Double out = nonNegative(pp + ".outputW", e.outputW(), ratedW == null ? MAX_GENERATOR_W : ratedW);
+            Double lph = positive(pp + ".litresPerHour", e.litresPerHour(), 1000);
+            if (out != null && lph != null) {
+                w[i] = out;
+                l[i] = lph;
+            }
+        }
+        if (problems.size() > before || ratedW == null) {
+            return null;
+        }
+        if (w[0] == w[1]) {
+            problem(p + ".points", "both points are at " + fmt(w[0]) + " W", "two different outputs, e.g. 25 % and 100 % load");
+            return null;
+        }
+        double slope = (l[1] - l[0]) / ((w[1] - w[0]) / 1000);
+        double f0 = (l[0] - slope * w[0] / 1000) / (ratedW / 1000);
+        if (slope < 0 || f0 < 0) {
+            problem(p + ".points", String.format(java.util.Locale.ROOT,
+                    "fit to a line with %s, got %.4f L/kWh and %.4f L/h per rated kW", slope < 0
+                            ? "fuel falling as output rises" : "a negative no-load fuel rate", slope, f0),
+                    "fuel that rises with output and is 0 or more at no load");
+            return null;
+        }
+        return FuelCurve.fitTwoPoints(ratedW, w[0], l[0], w[1], l[1]);
     }
 
     /** Largest module power accepted, W (a plausibility bound for one module). */

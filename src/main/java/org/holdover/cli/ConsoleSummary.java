@@ -46,6 +46,7 @@ final class ConsoleSummary {
             out.printf(Locale.ROOT, "  battery must deliver %,.0f Wh DC over %.0f h (inverter %.1f %% efficient over it, idle draw included)%n",
                     r.energy().energyDcWh(), r.energy().dischargeHours(), 100 * r.energy().effectiveEfficiency());
             pv(r, out);
+            generator(r, out);
             for (BusOption o : r.buses()) {
                 if (o != r.chosen()) {
                     out.printf(Locale.ROOT, "    %4.0f V bus: %s%n", o.busClassV(), o.reason());
@@ -114,6 +115,26 @@ final class ConsoleSummary {
 
     private static final String[] MONTHS = {"January", "February", "March", "April", "May", "June", "July", "August",
         "September", "October", "November", "December"};
+
+    /** The generator line: the set, and what it did over the simulated year. */
+    private static void generator(SizingResult r, PrintWriter out) {
+        if (r.generator() == null) {
+            if (r.input().generator().allowed()) {
+                out.println("  generator: none (allowed, but the least-cost passing system needs none)");
+            }
+            return;
+        }
+        var g = r.generator();
+        out.printf(Locale.ROOT, "  generator: %s (%s), %,.0f W rated%n", g.id(), g.description(), g.ratedW());
+        if (r.year() != null) {
+            var run = r.year().metrics().generator();
+            double price = r.input().generator().fuelPricePerL();
+            out.printf(Locale.ROOT, "  generator over the simulated year: %,d h running, %,d starts, %,.0f L of fuel%s, %,.0f Wh"
+                            + " (%,.0f Wh to the loads, %,.0f Wh to the charger, %,.0f Wh dumped)%n", run.hours(), run.starts(),
+                    run.fuelL(), price > 0 ? String.format(Locale.ROOT, " (%,.0f at %.2f per litre)", r.fuelCostPerYear(), price) : "",
+                    run.outputWh(), run.toLoadWh(), run.toChargerWh(), run.dumpedWh());
+        }
+    }
 
     private static void pv(SizingResult r, PrintWriter out) {
         SolarDesign sd = r.solar();

@@ -20,6 +20,7 @@ import java.util.List;
  * @param wiring      cable runs, for the DC-side checks
  * @param solar       the solar resource and PV array (optional)
  * @param notes       free text carried into the workbook as text
+ * @param generator optional engine generator: whether the system search may add one from the catalog, and how it runs
  */
 public record ProjectInput(
         String name,
@@ -33,7 +34,8 @@ public record ProjectInput(
         RulesInput rules,
         WiringInput wiring,
         SolarInput solar,
-        List<String> notes) {
+        List<String> notes,
+        GeneratorInput generator) {
 
     /** What the system is for. */
     public enum Mode { BACKUP, OFF_GRID }
@@ -245,5 +247,25 @@ public record ProjectInput(
     public record SolarInput(List<Double> monthlyGhiKwhM2Day, List<Double> monthlyAirTempC, String weatherFile,
                              Integer clearnessSeed, Double tiltDeg, Double azimuthDeg, Double albedo, String controller,
                              Double refillDays) {
+    }
+
+    /** Whether the system search may add a generator. */
+    public enum GeneratorUse { ALLOWED, NEVER }
+
+    /** How a running generator is dispatched. */
+    public enum GeneratorStrategy { LOAD_FOLLOWING, CYCLE_CHARGING }
+
+    /**
+     * The optional {@code generator:} section. The site altitude for derating is {@code site.elevationM}.
+     *
+     * @param use            allowed (default when the section is present) or never
+     * @param strategy       load-following or cycle-charging (default cycle-charging)
+     * @param startSocPct    the generator starts rather than let the battery fall below this state of charge, %
+     * @param setPointSocPct cycle charging: a running generator stops once the state of charge reaches this, %
+     * @param chargerAcW     the battery charger's largest AC input from the generator, W (default from the bank)
+     * @param fuelPricePerL  fuel price, currency per litre (for the fuel cost; default 0: not costed)
+     */
+    public record GeneratorInput(GeneratorUse use, GeneratorStrategy strategy, Double startSocPct, Double setPointSocPct,
+                                 Double chargerAcW, Double fuelPricePerL) {
     }
 }

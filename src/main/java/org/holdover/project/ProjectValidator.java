@@ -145,6 +145,24 @@ public final class ProjectValidator {
         if (p.solar() != null) {
             solar(p.solar());
         }
+        if (p.generator() != null) {
+            ProjectInput.GeneratorInput g = p.generator();
+            range("generator.startSocPct", g.startSocPct(), 0, 95, "%");
+            range("generator.setPointSocPct", g.setPointSocPct(), 5, 100, "%");
+            if (g.strategy() == ProjectInput.GeneratorStrategy.LOAD_FOLLOWING && g.setPointSocPct() != null) {
+                error("generator.setPointSocPct", "is only for cycle charging", "remove it or set strategy: cycle-charging");
+            }
+            double start = g.startSocPct() != null ? g.startSocPct() : DEFAULT_GENERATOR_START_PCT;
+            double set = g.setPointSocPct() != null ? g.setPointSocPct() : DEFAULT_GENERATOR_SET_POINT_PCT;
+            if (g.strategy() != ProjectInput.GeneratorStrategy.LOAD_FOLLOWING && set <= start
+                    && (g.startSocPct() != null || g.setPointSocPct() != null)) {
+                error(g.setPointSocPct() != null ? "generator.setPointSocPct" : "generator.startSocPct",
+                        "set point " + fmt(set) + " % is not above the start " + fmt(start) + " %",
+                        "a set point above the state of charge at which the generator starts");
+            }
+            rangeOpenLow("generator.chargerAcW", g.chargerAcW(), 0, 1e6, "W");
+            range("generator.fuelPricePerL", g.fuelPricePerL(), 0, 1000, "per litre");
+        }
         if (p.notes() != null) {
             for (int i = 0; i < p.notes().size(); i++) {
                 String n = p.notes().get(i);
@@ -154,6 +172,11 @@ public final class ProjectValidator {
             }
         }
     }
+
+    /** State of charge at which the generator starts when not given, % (common practice, no source). */
+    public static final double DEFAULT_GENERATOR_START_PCT = 30;
+    /** Cycle-charging set point when not given, % (common practice, no source). */
+    public static final double DEFAULT_GENERATOR_SET_POINT_PCT = 80;
 
     /** Chemistry words the project file accepts. */
     public static final List<String> CHEMISTRY_WORDS = List.of("lifepo4", "agm", "gel", "flooded");

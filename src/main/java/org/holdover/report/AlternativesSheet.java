@@ -94,6 +94,9 @@ final class AlternativesSheet {
         if (sr.objective().lifetime()) {
             wrappedHeader(ctx, s, r, 24, "Battery life, years", "Lifetime cost");
         }
+        if (sr.generatorsSearched()) {
+            wrappedHeader(ctx, s, r, GEN_ID, "Generator", "Generator price");
+        }
         r++;
         int first = r;
         for (int i = 0; i < rows.size(); i++) {
@@ -106,6 +109,9 @@ final class AlternativesSheet {
         s.text(r++, 0, "Cost against unmet energy: simulated systems no cheaper one beats on unmet energy", ctx.styles.subtitle);
         s.text(r++, 0, "Rows with a note fail a design check (too little battery for the outage or the autonomy, too little PV for"
                 + " the worst month): they show what the design checks buy, they are not offers.", ctx.styles.note);
+        if (sr.generatorsSearched()) {
+            wrappedHeader(ctx, s, r, GEN_ID, "Generator", "Generator price");
+        }
         wrappedHeader(ctx, s, r++, 0, HEAD);
         int frontFirst = r;
         for (SearchResult.Evaluated e : sr.frontier()) {
@@ -139,13 +145,14 @@ final class AlternativesSheet {
             s.text(r++, 5, j.reason());
         }
         s.sheet.setColumnWidth(0, 22 * 256);
-        for (int c = 1; c < HEAD.length + 2; c++) {
+        for (int c = 1; c < GEN_ID + 2; c++) {
             s.sheet.setColumnWidth(c, 9 * 256);
         }
         for (int c : new int[] {2, 4, 9, 15}) {
             s.sheet.setColumnWidth(c, 17 * 256);
         }
         s.sheet.setColumnWidth(HEAD.length - 1, 44 * 256);
+        s.sheet.setColumnWidth(GEN_ID, 17 * 256);
 
         if (first > 0 && sr.chosen() != null) {
             s.name("SearchChosenCost", first, COST);
@@ -164,6 +171,9 @@ final class AlternativesSheet {
         }
         s.sheet.getRow(r).setHeightInPoints(3 * 13f);
     }
+
+    /** Columns of the generator and its price (only when the search may add a generator). */
+    static final int GEN_ID = 26;
 
     private static void row(SheetWriter s, int r, String label, SearchResult.Evaluated e, SearchResult sr) {
         SearchResult.Candidate c = e.candidate();
@@ -188,7 +198,13 @@ final class AlternativesSheet {
         s.inputText(r, 15, pv == null ? "none" : pv.controllerId());
         s.input(r, 16, c.controllerPrice(), Styles.INT);
         s.input(r, 17, c.pvKw(), Styles.D2);
-        s.formula(r, COST, "D" + R + "+F" + R + "*G" + R + "+K" + R + "*L" + R + "+O" + R + "*Q" + R, c.cost(), Styles.INT);
+        boolean gen = sr.generatorsSearched();
+        if (gen) {
+            s.inputText(r, GEN_ID, p.generatorId() == null ? "none" : p.generatorId());
+            s.input(r, GEN_ID + 1, c.generatorPrice(), Styles.INT);
+        }
+        s.formula(r, COST, "D" + R + "+F" + R + "*G" + R + "+K" + R + "*L" + R + "+O" + R + "*Q" + R
+                + (gen ? "+" + SheetWriter.col(GEN_ID + 1) + R : ""), c.cost(), Styles.INT);
         if (Double.isNaN(e.unmetWh())) {
             s.text(r, 19, sr.simulated() ? "not simulated" : "not simulated (off grid without PV)");
         } else {

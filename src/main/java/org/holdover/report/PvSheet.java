@@ -394,9 +394,15 @@ final class PvSheet {
         int searchStrings = pin == null ? 0 : pin.totalStrings();
         r = input(s, r, "Strings the system search chose in all (0: the sizing's own)", "PvSearchStrings", searchStrings, "",
                 Styles.INT, "from the Alternatives sheet: more strings than the sizing needs when they make the cheapest passing system");
-        s.text(r, LABEL, "Strings needed in all");
-        s.formula(r, VALUE, "MAX(1,-INT(-(PvRequiredW/PvStringW-1E-9)),PvSearchStrings)",
-                Math.max(ArrayChooser.stringsNeeded(o.requiredStcW(), effString), searchStrings), Styles.INT);
+        if (ctx.r.generator() != null && searchStrings > 0) {
+            // With a generator the search may choose fewer strings than the sizing needs: the generator covers the rest.
+            s.text(r, LABEL, "Strings in all (the search's choice; the generator covers what the array leaves short)");
+            s.formula(r, VALUE, "MAX(1,PvSearchStrings)", searchStrings, Styles.INT);
+        } else {
+            s.text(r, LABEL, "Strings needed in all");
+            s.formula(r, VALUE, "MAX(1,-INT(-(PvRequiredW/PvStringW-1E-9)),PvSearchStrings)",
+                    Math.max(ArrayChooser.stringsNeeded(o.requiredStcW(), effString), searchStrings), Styles.INT);
+        }
         s.name("PvStringsNeeded", r++, VALUE);
         s.text(r, LABEL, "Strings on each controller");
         s.formula(r, VALUE, "-INT(-PvStringsNeeded/PvCtls)", c.stringsPerController(), Styles.INT);

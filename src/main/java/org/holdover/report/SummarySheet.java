@@ -73,6 +73,15 @@ final class SummarySheet {
                     + ",\"FAIL\")=0,\"pass\",\"FAIL\")", r.passes() ? "pass" : "FAIL");
             row = paragraph(ctx, s, row, r.year() == null ? "The year was not simulated: an off-grid system needs its PV array for that."
                     : "Daily-energy chain against the simulated year: " + r.year().comparison(r.bank()) + "; " + r.year().life() + ".");
+            if (r.generator() != null && r.year() != null) {
+                var g = r.year().metrics().generator();
+                s.text(row, 0, "Generator over the simulated year: running hours; starts");
+                s.formula(row, 1, "S_GenHours", g.hours(), Styles.INT);
+                s.formula(row++, 2, "S_GenStarts", g.starts(), Styles.INT);
+                s.text(row, 0, "Fuel over the simulated year, L; its cost at the project's fuel price");
+                s.formula(row, 1, "S_FuelL", g.fuelL(), Styles.D1);
+                s.formula(row++, 2, "S_FuelCost", r.fuelCostPerYear(), Styles.INT);
+            }
             row++;
             s.text(row++, 0, "Limits to look at (they do not reject the design; for code limits the authority having jurisdiction decides)", ctx.styles.subtitle);
             s.header(row++, 0, "Limit", "Design value", "Limit", "Unit", "Result", "Margin", "Basis");
@@ -141,6 +150,13 @@ final class SummarySheet {
         int invRow = InvertersSheet.FIRST + r.inverters().indexOf(r.inverter());
         s.formula(row++, 1, ctx.sheet(Context.INVERTERS).ref(invRow, InvertersSheet.PRICE) + "+" + bat.ref(bankRow, BatterySheet.COST),
                 r.inverter().spec().price() + b.price(), Styles.INT);
+        if (r.generator() != null) {
+            s.text(row, 0, "Engine generator");
+            s.text(row, 1, r.generator().id());
+            side(ctx, s, row++, r.generator().description());
+            s.text(row, 0, "Demo price: generator");
+            s.formula(row++, 1, "S_GenPrice", r.generator().price(), Styles.INT);
+        }
         row = PvSheet.summary(ctx, s, row);
         if (r.search() != null && r.search().chosen() != null) {
             var st = r.search().stats();

@@ -31,8 +31,18 @@ public final class HourlyTrace {
     final double[] batteryAcceptW;
     final double[] inverterDemandW;
     final double[] batteryAvailableW;
+    final double[] batteryFirstW;
+    final double[] inverterFirstOutputW;
+    final double[] generatorInverterShareW;
+    final double[] generatorInverterNeedW;
+    final double[] generatorBatteryAvailableW;
 
     HourlyTrace(int n) {
+        batteryFirstW = new double[n];
+        inverterFirstOutputW = new double[n];
+        generatorInverterShareW = new double[n];
+        generatorInverterNeedW = new double[n];
+        generatorBatteryAvailableW = new double[n];
         batteryAcceptW = new double[n];
         inverterDemandW = new double[n];
         batteryAvailableW = new double[n];
@@ -72,6 +82,34 @@ public final class HourlyTrace {
     /** Battery output available above the reserve (step 7; 0 in grid hours), W. */
     public double[] batteryAvailableW() {
         return batteryAvailableW.clone();
+    }
+
+    /** Battery output before the generator is considered, d1 (step 8; 0 in grid hours), W. */
+    public double[] batteryFirstW() {
+        return batteryFirstW.clone();
+    }
+
+    /** What the inverter can deliver from PV and the battery above the reserve, t1 (step 10; 0 in grid hours), W. */
+    public double[] inverterFirstOutputW() {
+        return inverterFirstOutputW.clone();
+    }
+
+    /** Generator running: the inverter's share of the load, t2 (load following) or t (cycle charging); else 0, W. */
+    public double[] generatorInverterShareW() {
+        return generatorInverterShareW.clone();
+    }
+
+    /**
+     * Generator running: the added DC input the inverter needs for its share, need2 (load following), or its whole DC
+     * input D2 (cycle charging); else 0, W.
+     */
+    public double[] generatorInverterNeedW() {
+        return generatorInverterNeedW.clone();
+    }
+
+    /** Generator running: battery output allowed, avail2 (load following) or availF (cycle charging); else 0, W. */
+    public double[] generatorBatteryAvailableW() {
+        return generatorBatteryAvailableW.clone();
     }
 
     /** Number of hours. */

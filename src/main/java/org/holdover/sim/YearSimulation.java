@@ -335,6 +335,11 @@ public final class YearSimulation {
                 double gridLoad = 0;
                 double demand = 0;
                 double available = 0;
+                double first = 0;
+                double firstOut = 0;
+                double share = 0;
+                double need = 0;
+                double availOn = 0;
                 if (gridUp[t]) {
                     gridLoad = l;
                     pvInv = 0;
@@ -358,6 +363,8 @@ public final class YearSimulation {
                     final double r1 = r - d1;
                     final double a1 = pvInv0 + d1;
                     final double t1 = r1 > 0 ? min(l, InverterLossModel.outputW(a1, pr, p0, b, k2)) : l;
+                    first = d1;
+                    firstOut = t1;
                     on = hasGen && (l - t1 > 0 || (cycleCharging && prevOn && e < eSet));
                     if (!on) {
                         pvInv = pvInv0;
@@ -377,6 +384,9 @@ public final class YearSimulation {
                         }
                         final double avail2 = min(pD - d1, max(0, (min(e, eRes) - eLo) * etaD));
                         final double d2 = min(need2, avail2);
+                        share = t2;
+                        need = need2;
+                        availOn = avail2;
                         invOut = d2 >= need2 ? t2 : min(t2, InverterLossModel.outputW(a1 + d2, pr, p0, b, k2));
                         unmet = t2 - invOut;
                         pvInv = pvInv0;
@@ -397,6 +407,9 @@ public final class YearSimulation {
                         final double rem = d2 - pvInv;
                         final double availF = min(pD, max(0, (e - eLo) * etaD));
                         final boolean covered = rem <= availF;
+                        share = tInv;
+                        need = d2;
+                        availOn = availF;
                         dis = covered ? rem : availF;
                         invIn = pvInv + dis;
                         invOut = covered ? tInv : min(tInv, InverterLossModel.outputW(invIn, pr, p0, b, k2));
@@ -479,6 +492,11 @@ public final class YearSimulation {
                     tr.batteryAcceptW[t] = acc;
                     tr.inverterDemandW[t] = demand;
                     tr.batteryAvailableW[t] = available;
+                    tr.batteryFirstW[t] = first;
+                    tr.inverterFirstOutputW[t] = firstOut;
+                    tr.generatorInverterShareW[t] = share;
+                    tr.generatorInverterNeedW[t] = need;
+                    tr.generatorBatteryAvailableW[t] = availOn;
                 }
             }
             if (socBlock != null) {

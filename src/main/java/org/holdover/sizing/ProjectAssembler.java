@@ -185,7 +185,47 @@ public final class ProjectAssembler {
         return new SizingInput(p.name(), p.mode(), volts, site.ac().frequencyHz(), split, invAmbient, cold, margin, maxA,
                 maxParallel, chem, dod, eol, b == null ? null : b.location(), outage, days, loads, catalog, assumptions,
                 warnings, p.notes() == null ? List.of() : p.notes(), measured == null ? null : measured.hourlyW(), scale,
-                served, wiring, unmet(p, assumptions), designTemp(site, cold), solar);
+                served, wiring, unmet(p, assumptions), designTemp(site, cold), solar, generator(p, assumptions));
+    }
+
+    /** The generator rules: none without a {@code generator:} section; otherwise its values or the defaults. */
+    private static GeneratorRules generator(ProjectInput p, List<Assumption> assumptions) {
+        ProjectInput.GeneratorInput g = p.generator();
+        if (g == null || g.use() == ProjectInput.GeneratorUse.NEVER) {
+            return GeneratorRules.NONE;
+        }
+        boolean loadFollowing = g.strategy() == ProjectInput.GeneratorStrategy.LOAD_FOLLOWING;
+        double start = (g.startSocPct() != null ? g.startSocPct()
+                : org.holdover.project.ProjectValidator.DEFAULT_GENERATOR_START_PCT) / 100.0;
+        assumptions.add(new Assumption("Generator starts below this state of charge", start, "", given(g.startSocPct()),
+                g.startSocPct() != null ? "project" : PRACTICE));
+        org.holdover.sim.DispatchStrategy strategy;
+        if (loadFollowing) {
+            strategy = new org.holdover.sim.DispatchStrategy.LoadFollowing();
+        } else {
+            double set = (g.setPointSocPct() != null ? g.setPointSocPct()
+                    : org.holdover.project.ProjectValidator.DEFAULT_GENERATOR_SET_POINT_PCT) / 100.0;
+            assumptions.add(new Assumption("Generator runs on until this state of charge (cycle charging)", set, "",
+                    given(g.setPointSocPct()), g.setPointSocPct() != null ? "project" : PRACTICE));
+            strategy = new org.holdover.sim.DispatchStrategy.CycleCharging(set);
+        }
+        assumptions.add(new Assumption("Generator dispatch: " + (loadFollowing ? "load following" : "cycle charging"),
+                loadFollowing ? 0 : 1, "", g.strategy() != null ? "project" : "default", g.strategy() != null ? "project"
+                : "cycle charging by default; the strategies as named by Barley and Winn, Solar Energy 58, 1996 (from memory)"));
+        double altitude = p.site() != null && p.site().elevationM() != null ? p.site().elevationM() : 0.0;
+        var derating = org.holdover.sim.GeneratorSizing.AltitudeDerating.TRADE_RULE;
+        assumptions.add(new Assumption("Generator altitude derating, fraction of the rating lost per 1,000 ft above 500 ft",
+                derating.fractionPerM() * 304.8, "", "default",
+                "trade rule for naturally aspirated engines (common practice, no standard); turbocharged sets derate less"));
+        double charger = g.chargerAcW() != null ? g.chargerAcW() : Double.NaN;
+        assumptions.add(new Assumption(g.chargerAcW() != null ? "Charger AC input from the generator"
+                : "Generator charger: charging rate as a fraction of the bank's rated energy per hour (within its charge limit)",
+                g.chargerAcW() != null ? charger : GeneratorRules.CHARGE_RATE_PER_H, g.chargerAcW() != null ? "W" : "/h",
+                given(g.chargerAcW()), g.chargerAcW() != null ? "project" : PRACTICE));
+        double price = g.fuelPricePerL() != null ? g.fuelPricePerL() : 0.0;
+        assumptions.add(new Assumption("Fuel price", price, "per litre", given(g.fuelPricePerL()),
+                g.fuelPricePerL() != null ? "project" : "not given: fuel not costed"));
+        return new GeneratorRules(true, strategy, start, altitude, derating, charger, price);
     }
 
     private static double unmet(ProjectInput p, List<Assumption> assumptions) {

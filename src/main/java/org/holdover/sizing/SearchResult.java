@@ -21,6 +21,13 @@ public record SearchResult(Evaluated chosen, List<Evaluated> alternatives, List<
                            List<Sensitivity> sensitivity, Stats stats, double unmetLimitWh, boolean simulated,
                            Objective objective) {
 
+    /** Whether the search may have added a generator (a generator's id appears in some family). */
+    public boolean generatorsSearched() {
+        return java.util.stream.Stream.concat(java.util.stream.Stream.concat(java.util.stream.Stream.ofNullable(chosen),
+                alternatives.stream()), frontier.stream()).anyMatch(e -> e.candidate().pin().generatorId() != null)
+                || rejected.stream().anyMatch(r -> r.family().contains(", generator "));
+    }
+
     public SearchResult {
         alternatives = List.copyOf(alternatives);
         frontier = List.copyOf(frontier);
@@ -43,14 +50,16 @@ public record SearchResult(Evaluated chosen, List<Evaluated> alternatives, List<
      * @param bankKwh    rated bank energy, kWh
      * @param pvKw       PV array STC power, kW
      * @param lowestMargin the smallest margin of the candidate's cheap checks, fraction (NaN when not known)
+     * @param generatorPrice demo price of the generator (0 without one)
      */
     public record Candidate(SystemPin pin, String family, double inverterPrice, int bankModules, double bankModulePrice,
                             int pvModules, double pvModulePrice, int controllers, double controllerPrice, double bankKwh,
-                            double pvKw, double lowestMargin) {
+                            double pvKw, double lowestMargin, double generatorPrice) {
 
-        /** Demo capital cost: inverter + battery modules + PV modules + controllers. */
+        /** Demo capital cost: inverter + battery modules + PV modules + controllers + generator. */
         public double cost() {
-            return inverterPrice + bankModules * bankModulePrice + pvModules * pvModulePrice + controllers * controllerPrice;
+            return inverterPrice + bankModules * bankModulePrice + pvModules * pvModulePrice + controllers * controllerPrice
+                    + generatorPrice;
         }
 
         /** The components in a few words. */
@@ -61,6 +70,9 @@ public record SearchResult(Evaluated chosen, List<Evaluated> alternatives, List<
                 SystemPin.PvPin p = pin.pv();
                 s += String.format(java.util.Locale.ROOT, ", %d × %s (%d per string, %d strings on each of %d × %s; %.1f kW)", pvModules,
                         p.moduleId(), p.modulesPerString(), p.stringsPerController(), p.controllers(), p.controllerId(), pvKw);
+            }
+            if (pin.generatorId() != null) {
+                s += ", generator " + pin.generatorId();
             }
             return s;
         }

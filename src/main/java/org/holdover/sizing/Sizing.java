@@ -99,8 +99,23 @@ public final class Sizing {
                 dc.shortCircuit().atBatteryTerminalsA(), org.holdover.dc.ShortCircuit.COMMON_ORDINARY_DEVICE_LIMIT_A, "A",
                 Check.Sense.AT_MOST, "above this, use a DC device rated to interrupt it (common practice, no source)"));
         SolarDesign solar = in.solar() == null ? null : PvSizing.size(in, chosen, chosenEnergy, pin == null ? null : pin.pv());
+        org.holdover.catalog.GeneratorItem generator = pin == null || pin.generatorId() == null ? null
+                : GeneratorPlan.find(in, pin.generatorId());
+        if (generator != null) {
+            checks.addAll(GeneratorPlan.checks(in, generator, bank));
+        }
         if (solar != null) {
-            checks.addAll(solar.checks());
+            for (Check c : solar.checks()) {
+                // With a generator the PV array need not carry the worst month alone: the generator covers the shortfall
+                // (the simulated year checks it), so the monthly energy and array-power checks become advisories. The
+                // battery's outage or autonomy check stays a check.
+                if (generator != null && (c.id().equals(PvSizing.ENERGY) || c.id().equals(PvSizing.ARRAY_POWER))) {
+                    advisories.add(new Check(c.id(), c.label() + " (advisory: the generator covers a shortfall)", c.value(),
+                            c.limit(), c.unit(), c.sense(), c.basis()));
+                } else {
+                    checks.add(c);
+                }
+            }
             advisories.addAll(solar.advisories());
         }
         PvCircuits pvCircuits = solar != null && solar.chosen() != null
@@ -126,14 +141,15 @@ public final class Sizing {
             ccEff = o.controller().controller().efficiency();
             ccLimit = o.output().maxOutputW();
         }
-        if (in.mode() == ProjectInput.Mode.BACKUP || pvW != null) {
-            // Without PV an off-grid year has nothing to recharge the bank, so it is not simulated.
-            year = YearCheck.run(in, bank, loss, chosenEnergy, pvW, ccEff, ccLimit, in.maxUnmetFraction(), batteryTemp);
+        if (in.mode() == ProjectInput.Mode.BACKUP || pvW != null || generator != null) {
+            // Without PV or a generator an off-grid year has nothing to recharge the bank, so it is not simulated.
+            year = YearCheck.run(in, bank, loss, chosenEnergy, pvW, ccEff, ccLimit, in.maxUnmetFraction(), batteryTemp,
+                    generator == null ? java.util.Optional.empty() : java.util.Optional.of(GeneratorPlan.simulated(in, generator)));
             checks.add(new Check("sim.unmet", "Unmet energy over the simulated year", year.metrics().reliability().unmetWh(),
                     year.unmetLimitWh(), "Wh", Check.Sense.AT_MOST, "project reliability target; hour-by-hour energy balance"));
         }
         return new SizingResult(in, assessments, buses, chosen, chosenEnergy, bank.requirement(), checks, advisories,
-                WeightedEfficiency.CEC.of(loss), WeightedEfficiency.EURO.of(loss), year, solar, pvCircuits, null);
+                WeightedEfficiency.CEC.of(loss), WeightedEfficiency.EURO.of(loss), year, solar, pvCircuits, null, generator);
     }
 
     static InverterAssessment assess(InverterSpec s, SizingInput in) {

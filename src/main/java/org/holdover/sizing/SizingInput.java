@@ -47,8 +47,9 @@ public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms
                           double autonomyDays, LoadAnalysis loads, Catalog catalog, List<Assumption> assumptions,
                           List<Problem> warnings, List<String> notes, double[] measuredW,
                           double profileScale, boolean profileServed, WiringRules wiring,
-                          double maxUnmetFraction, double batteryDesignC, SolarSetup solar) {
+                          double maxUnmetFraction, double batteryDesignC, SolarSetup solar, GeneratorRules generator) {
     public SizingInput {
+        generator = generator == null ? GeneratorRules.NONE : generator;
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(mode, "mode");
         Objects.requireNonNull(loads, "loads");
@@ -65,11 +66,42 @@ public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms
         }
     }
 
+    /** Without generator rules (no generator). */
+    public SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms, double frequencyHz, boolean splitPhase,
+                       double inverterAmbientC, double batteryColdestC, double inverterMargin,
+                       double maxBatteryCurrentA, int maxParallelRule, Chemistry chemistry, Double depthOfDischarge,
+                       Double endOfLife, ProjectInput.BatteryLocation location, double outageHours,
+                       double autonomyDays, LoadAnalysis loads, Catalog catalog, List<Assumption> assumptions,
+                       List<Problem> warnings, List<String> notes, double[] measuredW,
+                       double profileScale, boolean profileServed, WiringRules wiring,
+                       double maxUnmetFraction, double batteryDesignC, SolarSetup solar) {
+        this(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin, maxBatteryCurrentA,
+                maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours, autonomyDays, loads, catalog,
+                assumptions, warnings, notes, measuredW, profileScale, profileServed, wiring, maxUnmetFraction, batteryDesignC, solar,
+                GeneratorRules.NONE);
+    }
+
+    /** The same input with other generator rules. */
+    public SizingInput withGenerator(GeneratorRules g) {
+        return new SizingInput(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin,
+                maxBatteryCurrentA, maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours, autonomyDays,
+                loads, catalog, assumptions, warnings, notes, measuredW, profileScale, profileServed, wiring, maxUnmetFraction,
+                batteryDesignC, solar, g);
+    }
+
+    /** The same input with another catalog. */
+    public SizingInput withCatalog(Catalog c) {
+        return new SizingInput(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin,
+                maxBatteryCurrentA, maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours, autonomyDays,
+                loads, c, assumptions, warnings, notes, measuredW, profileScale, profileServed, wiring, maxUnmetFraction,
+                batteryDesignC, solar, generator);
+    }
+
     /** The same input with other cable runs and conductor rules. */
     public SizingInput withWiring(WiringRules w) {
         return new SizingInput(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin,
                 maxBatteryCurrentA, maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours, autonomyDays,
                 loads, catalog, assumptions, warnings, notes, measuredW, profileScale, profileServed, w, maxUnmetFraction,
-                batteryDesignC, solar);
+                batteryDesignC, solar, generator);
     }
 }

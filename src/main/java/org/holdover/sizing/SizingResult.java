@@ -26,7 +26,16 @@ public record SizingResult(SizingInput input, List<InverterAssessment> inverters
                            BusOption chosen, EnergyBasis energy, BankRequirement requirement, List<Check> checks,
                            List<Check> advisories, double cecEfficiency, double euroEfficiency,
                            YearCheck year, SolarDesign solar, PvCircuits pvCircuits,
-                           SearchResult search) {
+                           SearchResult search, org.holdover.catalog.GeneratorItem generator) {
+
+    /** Without a generator. */
+    public SizingResult(SizingInput input, List<InverterAssessment> inverters, List<BusOption> buses,
+                        BusOption chosen, EnergyBasis energy, BankRequirement requirement, List<Check> checks,
+                        List<Check> advisories, double cecEfficiency, double euroEfficiency,
+                        YearCheck year, SolarDesign solar, PvCircuits pvCircuits, SearchResult search) {
+        this(input, inverters, buses, chosen, energy, requirement, checks, advisories, cecEfficiency, euroEfficiency, year, solar,
+                pvCircuits, search, null);
+    }
 
     public SizingResult {
         inverters = List.copyOf(inverters);
@@ -38,6 +47,11 @@ public record SizingResult(SizingInput input, List<InverterAssessment> inverters
     /** A system was found and every check passes. */
     public boolean passes() {
         return chosen != null && checks.stream().allMatch(Check::passes);
+    }
+
+    /** Fuel cost of the simulated year at the project's fuel price (0 without a generator or a price). */
+    public double fuelCostPerYear() {
+        return year == null ? 0 : year.metrics().generator().fuelL() * input.generator().fuelPricePerL();
     }
 
     /** The chosen bank, or null. */
@@ -53,6 +67,6 @@ public record SizingResult(SizingInput input, List<InverterAssessment> inverters
     /** The same result with the search's findings. */
     public SizingResult withSearch(SearchResult s) {
         return new SizingResult(input, inverters, buses, chosen, energy, requirement, checks, advisories, cecEfficiency,
-                euroEfficiency, year, solar, pvCircuits, s);
+                euroEfficiency, year, solar, pvCircuits, s, generator);
     }
 }

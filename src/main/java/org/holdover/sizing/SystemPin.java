@@ -10,8 +10,14 @@ import java.util.Objects;
  * @param batteryModuleId catalog battery module
  * @param strings         parallel battery strings (at least what the bank's requirement asks for)
  * @param pv              the PV layout, or null without PV
+ * @param generatorId     catalog generator, or null without one
  */
-public record SystemPin(double busClassV, String inverterId, String batteryModuleId, int strings, PvPin pv) {
+public record SystemPin(double busClassV, String inverterId, String batteryModuleId, int strings, PvPin pv, String generatorId) {
+
+    /** A system without a generator. */
+    public SystemPin(double busClassV, String inverterId, String batteryModuleId, int strings, PvPin pv) {
+        this(busClassV, inverterId, batteryModuleId, strings, pv, null);
+    }
 
     public SystemPin {
         Objects.requireNonNull(inverterId, "inverterId");

@@ -33,7 +33,9 @@ import org.holdover.sizing.SearchResult.Sensitivity;
  * <p>Candidates are every combination the catalog allows: bus class × inverter × battery module × parallel strings
  * (from what the battery sizing asks for up to the most allowed) × PV module × charge controller × modules per
  * string × strings × controllers (from what the PV sizing asks for up to {@value #EXTRA_PV_SHARE} more, at least
- * {@value #EXTRA_PV_MIN} more strings). The design requirements stay hard checks: the bank covers the outage or the
+ * {@value #EXTRA_PV_MIN} more strings) × generator (none, or, when the project allows one, each catalog set that suits the
+ * service and covers the charger and the running loads; with a generator, PV layouts from one string up, since the
+ * generator may cover what a smaller array leaves short: the worst-month PV checks do not reject those systems). The design requirements stay hard checks: the bank covers the outage or the
  * days of autonomy after its derating, the array refills it in the worst month, every voltage, current, conductor
  * and motor-start check passes.
  *
@@ -45,7 +47,8 @@ import org.holdover.sizing.SearchResult.Sensitivity;
  *       over the year in that order, in batches across all cores; the first that leaves no more unmet energy than
  *       the project accepts is the least-cost system. A system is not simulated when a larger one of the same family
  *       (as many or more battery strings and PV strings, same parts otherwise) already failed: more battery and more
- *       PV never leave more unmet (the simulation's property tests check this).</li>
+ *       PV never leave more unmet (the simulation's property tests check this). Systems with a generator are never
+ *       skipped this way (see {@code dominated}).</li>
  *   <li>The search goes on until the next best systems of other families are found, then simulates smaller systems
  *       of the chosen family (fewer strings than the design checks allow) for the cost-versus-unmet frontier, and the
  *       chosen system under more load and a poorer solar year.</li>
@@ -121,11 +124,18 @@ public final class SystemSearch {
     }
 
     /**
+     * A catalog generator and the generator the simulation runs ({@code full} in {@link PvPart} says whether a PV layout
+     * passes the PV sizing on its own; with a generator, smaller arrays are searched too).
+     */
+    record GenPart(org.holdover.catalog.GeneratorItem item, org.holdover.sim.Generator sim, double margin) {
+    }
+
+    /**
      * A PV layout: {@code unit} is one string's output to the controller each hour (null without PV).
      */
     record PvPart(SystemPin.PvPin pin, double price, int modules, double stcW, double[] unit, double efficiency,
-                  double limitW, double margin, int neededStrings, PvSizing.Pair pair, PvOption own) {
-        static final PvPart NONE = new PvPart(null, 0, 0, 0, null, 1.0, YearCheck.NO_PV_LIMIT_W, Double.NaN, 0, null, null);
+                  double limitW, double margin, int neededStrings, PvSizing.Pair pair, PvOption own, boolean full) {
+        static final PvPart NONE = new PvPart(null, 0, 0, 0, null, 1.0, YearCheck.NO_PV_LIMIT_W, Double.NaN, 0, null, null, true);
 
         double[] seriesW(int strings) {
             if (unit == null) {
@@ -144,11 +154,19 @@ public final class SystemSearch {
      * objective, the replacements its battery would need if it lasted its calendar life (the simulated life is never
      * longer, and a shorter life never costs less).
      */
-    record Cand(Group g, BankPart bank, PvPart pv, Candidate candidate, double bound) {
+    record Cand(Group g, BankPart bank, PvPart pv, Candidate candidate, double bound, GenPart gen) {
         Cand withBound(SearchResult.Objective o) {
             double life = bank.design().module().chemistry().calendarLifeYears();
-            return new Cand(g, bank, pv, candidate, o.of(candidate, life));
+            return new Cand(g, bank, pv, candidate, o.of(candidate, life), gen);
         }
+    }
+
+    /**
+     * Whether a candidate is checked against a simulated year: always in backup mode, with PV or with a generator; off grid
+     * with neither, nothing recharges the bank and the battery sizing alone decides.
+     */
+    static boolean simulated(SizingInput in, Cand c) {
+        return in.mode() == ProjectInput.Mode.BACKUP || c.pv.pin() != null || c.gen != null;
     }
 
     public static SearchResult run(SizingInput in, Options o) {
@@ -162,7 +180,7 @@ public final class SystemSearch {
         }
         all.sort(ORDER);
         long t1 = System.nanoTime();
-        boolean simulate = in.mode() == ProjectInput.Mode.BACKUP || in.solar() != null;
+        boolean simulate = in.mode() == ProjectInput.Mode.BACKUP || in.solar() != null || in.generator().allowed();
         double[] batteryTemp = new double[in.loads().calendar().hours()];
         java.util.Arrays.fill(batteryTemp, in.batteryDesignC());
         double limitWh = in.maxUnmetFraction() * sum(in.loads().loadW());
@@ -180,7 +198,9 @@ public final class SystemSearch {
             // The largest system of each family and layout first: when it fails, every smaller one fails too.
             Map<String, Cand> corners = new LinkedHashMap<>();
             for (Cand c : all) {
-                corners.merge(domKey(c), c, SystemSearch::corner);
+                if (c.gen == null && simulated(in, c)) {
+                    corners.merge(domKey(c), c, SystemSearch::corner);
+                }
             }
             List<Cand> tops = new ArrayList<>(corners.values());
             Evaluated[] r = new Evaluated[tops.size()];
@@ -221,23 +241,15 @@ public final class SystemSearch {
                 continue;
             }
             Evaluated[] results = new Evaluated[batch.size()];
-            if (simulate) {
-                IntStream.range(0, batch.size()).parallel()
-                        .forEach(k -> results[k] = simulate(in, batch.get(k), batteryTemp, "", objective, cache));
-                simulated += batch.size();
-            } else {
-                for (int k = 0; k < batch.size(); k++) {
-                    Candidate cand = batch.get(k).candidate;
-                    double life = batch.get(k).bank.design().module().chemistry().calendarLifeYears();
-                    results[k] = new Evaluated(cand, Double.NaN, 0, Double.NaN, true, "",
-                            objective.lifetime() ? life : Double.NaN, objective.of(cand, life));
-                }
-            }
+            IntStream.range(0, batch.size()).parallel()
+                    .forEach(k -> results[k] = simulated(in, batch.get(k))
+                            ? simulate(in, batch.get(k), batteryTemp, "", objective, cache) : unsimulated(batch.get(k), objective));
             for (int k = 0; k < batch.size(); k++) {
                 Evaluated e = results[k];
                 Cand c = batch.get(k);
-                if (simulate) {
+                if (simulated(in, c)) {
                     simulatedAll.add(e);
+                    simulated++;
                 }
                 String fam = c.candidate.family();
                 if (e.passes()) {
@@ -272,13 +284,13 @@ public final class SystemSearch {
         }
         List<Evaluated> frontier = new ArrayList<>(simulatedAll);
         List<Sensitivity> sensitivity = new ArrayList<>();
-        if (chosenCand != null && simulate && !stopped) {
+        if (chosenCand != null && simulated(in, chosenCand) && !stopped) {
             List<Evaluated> smaller = smaller(in, chosenCand, batteryTemp);
             frontier.addAll(smaller);
             simulated += smaller.size();
         }
         if (chosenCand != null && !stopped) {
-            sensitivity.addAll(sensitivity(in, chosenCand, o, batteryTemp, simulate));
+            sensitivity.addAll(sensitivity(in, chosenCand, o, batteryTemp, simulated(in, chosenCand)));
         }
         double simMs = (System.nanoTime() - t1) / 1e6;
         SearchResult.Stats stats = new SearchResult.Stats(w.families, w.cheapChecks, all.size(), simulated, pruned, cheapMs, simMs,
@@ -287,6 +299,13 @@ public final class SystemSearch {
     }
 
     private record Found(Evaluated e, int index) {
+    }
+
+    /** A candidate that is not simulated (off grid without PV or generator): it passes on its design checks. */
+    private static Evaluated unsimulated(Cand c, SearchResult.Objective objective) {
+        double life = c.bank.design().module().chemistry().calendarLifeYears();
+        return new Evaluated(c.candidate, Double.NaN, 0, Double.NaN, true, "", objective.lifetime() ? life : Double.NaN,
+                objective.of(c.candidate, life));
     }
 
     /** Enough found: {@code wanted} families have a passing system, and no later candidate can beat the last of them. */
@@ -308,7 +327,8 @@ public final class SystemSearch {
         all.sort(ORDER);
         double[] batteryTemp = new double[in.loads().calendar().hours()];
         java.util.Arrays.fill(batteryTemp, in.batteryDesignC());
-        return all.parallelStream().map(c -> simulate(in, c, batteryTemp, "", objective)).toList();
+        return all.parallelStream().map(c -> simulated(in, c) ? simulate(in, c, batteryTemp, "", objective)
+                : unsimulated(c, objective)).toList();
     }
 
     /** Every system passing the cheap checks, least cost first (for the benchmark and tests). */
@@ -331,7 +351,8 @@ public final class SystemSearch {
             .thenComparing(c -> c.pv.pin() == null ? "" : c.pv.pin().controllerId())
             .thenComparingInt(c -> c.pv.pin() == null ? 0 : c.pv.pin().modulesPerString())
             .thenComparingInt(c -> c.pv.pin() == null ? 0 : c.pv.pin().controllers())
-            .thenComparingInt(c -> c.pv.pin() == null ? 0 : c.pv.pin().stringsPerController());
+            .thenComparingInt(c -> c.pv.pin() == null ? 0 : c.pv.pin().stringsPerController())
+            .thenComparing(c -> c.gen == null ? "" : c.gen.item().id());
 
     private static int sPer(Cand c) {
         return c.pv.pin() == null ? 0 : c.pv.pin().stringsPerController();
@@ -353,7 +374,18 @@ public final class SystemSearch {
         return c.candidate.family() + "|" + (p == null ? "" : p.modulesPerString() + "x" + p.controllers());
     }
 
+    /**
+     * A system is skipped when a larger one of its family and layout (as many or more battery strings and PV strings, the
+     * same parts otherwise, the same generator or none) already failed: more battery and more PV never leave more unmet
+     * without a generator (the simulation's property tests check this). The family names the generator, so a failure
+     * with one generator never prunes a system with another or without one. With a generator the property is not proved
+     * (a larger bank moves the generator's starts and stops, and under cycle charging the hours it charges), so systems
+     * with a generator are never pruned: each is simulated, as brute force does.
+     */
     private static boolean dominated(Map<String, List<int[]>> failed, Cand c) {
+        if (c.gen != null) {
+            return false;
+        }
         List<int[]> f = failed.get(domKey(c));
         if (f == null) {
             return false;
@@ -380,11 +412,12 @@ public final class SystemSearch {
                               Conditions cache) {
         int strings = c.pv.pin() == null ? 0 : c.pv.pin().totalStrings();
         if (cache == null) {
-            return simulate(in, c.g, c.bank.design(), c.pv, strings, c.candidate, batteryTemp, designNote, 1.0, 1.0, objective);
+            return simulate(in, c.g, c.bank.design(), c.pv, strings, c.candidate, batteryTemp, designNote, 1.0, 1.0, objective,
+                    c.gen);
         }
         YearCheck.Year y = cache.year(in, c.g, batteryTemp);
-        YearCheck.Prepared p = YearCheck.prepare(y, c.bank.design(), c.g.inverter().spec().loss(), c.pv.seriesW(strings),
-                c.pv.efficiency(), c.pv.limitW());
+        YearCheck.Prepared p = YearCheck.prepare(y, in, c.bank.design(), c.g.inverter().spec().loss(), c.pv.seriesW(strings),
+                c.pv.efficiency(), c.pv.limitW(), c.gen == null ? java.util.Optional.empty() : java.util.Optional.of(c.gen.sim()));
         return evaluate(p, c.bank.design(), c.candidate, designNote, y.unmetLimitWh(), objective);
     }
 
@@ -400,10 +433,11 @@ public final class SystemSearch {
 
     private static Evaluated simulate(SizingInput in, Group g, BankDesign bank, PvPart pv, int pvStrings, Candidate cand,
                                       double[] batteryTemp, String designNote, double loadFactor, double solarFactor,
-                                      SearchResult.Objective objective) {
+                                      SearchResult.Objective objective, GenPart gen) {
         double[] pvW = pv.seriesW(pvStrings);
         YearCheck.Prepared p = YearCheck.prepare(in, bank, g.inverter().spec().loss(), g.energy(), pvW, pv.efficiency(),
-                pv.limitW(), in.maxUnmetFraction(), batteryTemp);
+                pv.limitW(), in.maxUnmetFraction(), batteryTemp,
+                gen == null ? java.util.Optional.empty() : java.util.Optional.of(gen.sim()));
         double limit = p.unmetLimitWh();
         if (loadFactor != 1.0 || solarFactor != 1.0) {
             double[] load = p.loadW().clone();
@@ -535,10 +569,43 @@ public final class SystemSearch {
             if (w.parts.isEmpty()) {
                 continue;
             }
-            Group g = new Group(x.cls, x.a, x.energy, x.base, x.banks, w.parts);
-            for (BankPart b : x.banks) {
-                for (PvPart part : w.parts) {
-                    out.add(new Cand(g, b, part, candidate(g, b, part), 0));
+            List<PvPart> pvs = w.parts;
+            List<BankPart> banks = x.banks;
+            String bankFamily = x.bankFamily;
+            Group g = new Group(x.cls, x.a, x.energy, x.base, banks, pvs);
+            List<org.holdover.catalog.GeneratorItem> gens = new ArrayList<>();
+            if (in.generator().allowed()) {
+                for (org.holdover.catalog.GeneratorItem gi : in.catalog().generators()) {
+                    checks++;
+                    String why = GeneratorPlan.acMismatch(in, gi);
+                    if (why.isEmpty()) {
+                        gens.add(gi);
+                    } else {
+                        rejected.add(new Rejection(bankFamily + ", generator " + gi.id(), why));
+                    }
+                }
+            }
+            for (BankPart b : banks) {
+                for (PvPart part : pvs) {
+                    if (part.full()) {
+                        out.add(new Cand(g, b, part, candidate(g, b, part, null), 0, null));
+                    }
+                }
+                for (org.holdover.catalog.GeneratorItem gi : gens) {
+                    checks++;
+                    List<Check> gc = GeneratorPlan.checks(in, gi, b.design());
+                    Check bad = gc.stream().filter(c -> !c.passes()).findFirst().orElse(null);
+                    if (bad != null) {
+                        if (b == banks.get(0)) {
+                            rejected.add(new Rejection(bankFamily + ", generator " + gi.id(), failure(bad)));
+                        }
+                        continue;
+                    }
+                    GenPart gp = new GenPart(gi, GeneratorPlan.simulated(in, gi),
+                            gc.stream().mapToDouble(Check::margin).min().orElse(Double.NaN));
+                    for (PvPart part : pvs) {
+                        out.add(new Cand(g, b, part, candidate(g, b, part, gp), 0, gp));
+                    }
                 }
             }
         }
@@ -579,7 +646,7 @@ public final class SystemSearch {
                 rejected.add(new Rejection(pvFamily, failure(own.firstFailure())));
                 continue;
             }
-            Layouts l = layouts(in, pair, own);
+            Layouts l = layouts(in, pair, own, in.generator().allowed());
             checks += l.checked;
             if (l.parts.isEmpty()) {
                 rejected.add(new Rejection(pvFamily, "no layout passes: " + l.last));
@@ -590,7 +657,7 @@ public final class SystemSearch {
     }
 
     /** Every layout of a module and controller pair from what the sizing asks for to the most searched. */
-    private static Layouts layouts(SizingInput in, PvSizing.Pair pair, PvOption own) {
+    private static Layouts layouts(SizingInput in, PvSizing.Pair pair, PvOption own, boolean smallerToo) {
         PvSizing.StringWindowRange win = pair.window();
         int lo = win.max() >= win.min() ? win.min() : own.candidate().modulesPerString();
         int hi = win.max() >= win.min() ? win.max() : own.candidate().modulesPerString();
@@ -607,7 +674,8 @@ public final class SystemSearch {
             for (int k = 1; k <= maxK; k++) {
                 int first = (int) Math.ceil((double) needed / k);
                 int last = (int) Math.ceil((double) most / k);
-                for (int s = first; s <= last; s++) {
+                // With a generator allowed, smaller arrays too: the generator may cover what they leave short.
+                for (int s = smallerToo ? 1 : first; s <= last; s++) {
                     jobs.add(new Job(n, k, s, needed));
                 }
             }
@@ -632,7 +700,10 @@ public final class SystemSearch {
                     pair.cond(), Math.max(job.k, maxK));
             org.holdover.pv.ArrayCandidate f = ArrayChooser.fixed(pair.mi().module(), ctl, job.n, job.s, job.k, chooserIn);
             org.holdover.pv.Check bad = f.checks().stream()
-                    .filter(c -> !c.passes() && c.severity() == org.holdover.pv.Check.Severity.REQUIRED).findFirst().orElse(null);
+                    .filter(c -> !c.passes() && c.severity() == org.holdover.pv.Check.Severity.REQUIRED)
+                    .filter(c -> !(smallerToo && c.id().equals(ARRAY_POWER_ID))).findFirst().orElse(null);
+            boolean full = job.s >= (int) Math.ceil((double) job.needed / job.k) && f.checks().stream()
+                    .noneMatch(c -> !c.passes() && c.severity() == org.holdover.pv.Check.Severity.REQUIRED);
             if (bad != null) {
                 why[j] = String.format(Locale.ROOT, "%s %s %s %s", bad.description(), num(bad.value(), bad.unit()),
                         bad.bound() == org.holdover.pv.Check.Bound.MIN ? "<" : ">", num(bad.limit(), bad.unit()));
@@ -656,14 +727,17 @@ public final class SystemSearch {
                     if (perDay[m] < need[m]) {
                         why[j] = String.format(Locale.ROOT, "PV energy to the battery in month %d %.0f Wh/day < %.0f Wh/day", m + 1,
                                 perDay[m], need[m]);
-                        return;
+                        full = false;
+                        if (!smallerToo) {
+                            return;
+                        }
                     }
                 }
             }
             int modules = job.n * strings;
             parts[j] = new PvPart(new SystemPin.PvPin(pair.mi().id(), pair.ci().id(), job.n, job.s, job.k),
                     modules * pair.mi().price() + job.k * pair.ci().price(), modules, f.totalStcW(), u, eta, maxOut, margin,
-                    job.needed, pair, own);
+                    job.needed, pair, own, full);
         });
         List<PvPart> ok = new ArrayList<>();
         String last = "";
@@ -677,15 +751,21 @@ public final class SystemSearch {
         return new Layouts(ok, jobs.size() + (hi - lo + 1), last);
     }
 
-    private static Candidate candidate(Group g, BankPart b, PvPart pv) {
+    private static Candidate candidate(Group g, BankPart b, PvPart pv, GenPart gen) {
         BankDesign d = b.design();
-        SystemPin pin = new SystemPin(g.busClassV(), g.inverter().spec().id(), d.module().id(), d.strings(), pv.pin());
+        SystemPin pin = new SystemPin(g.busClassV(), g.inverter().spec().id(), d.module().id(), d.strings(), pv.pin(),
+                gen == null ? null : gen.item().id());
         String family = fmt(g.busClassV()) + " V, " + g.inverter().spec().id() + ", " + d.module().id()
-                + (pv.pin() == null ? "" : ", " + pv.pin().moduleId() + " on " + pv.pin().controllerId());
+                + (pv.pin() == null ? "" : ", " + pv.pin().moduleId() + " on " + pv.pin().controllerId())
+                + (gen == null ? "" : ", generator " + gen.item().id());
         double margin = Double.isNaN(pv.margin()) ? b.margin() : Math.min(b.margin(), pv.margin());
+        if (gen != null && !Double.isNaN(gen.margin())) {
+            margin = Double.isNaN(margin) ? gen.margin() : Math.min(margin, gen.margin());
+        }
         return new Candidate(pin, family, g.inverter().spec().price(), d.modules(), d.module().price(), pv.modules(),
                 pv.pair() == null ? 0 : pv.pair().mi().price(), pv.pin() == null ? 0 : pv.pin().controllers(),
-                pv.pair() == null ? 0 : pv.pair().ci().price(), d.bankEnergyWh() / 1000.0, pv.stcW() / 1000.0, margin);
+                pv.pair() == null ? 0 : pv.pair().ci().price(), d.bankEnergyWh() / 1000.0, pv.stcW() / 1000.0, margin,
+                gen == null ? 0 : gen.item().price());
     }
 
     /** Smaller systems of the chosen family, below what the design checks allow, for the frontier. */
@@ -722,14 +802,15 @@ public final class SystemSearch {
             if (pin != null && pin.totalStrings() < pv.neededStrings()) {
                 notes.add("less PV than the PV sizing asks for (" + pv.neededStrings() + " strings)");
             }
-            Candidate cand = new Candidate(new SystemPin(c.g.busClassV(), c.candidate.pin().inverterId(), d.module().id(), job.p, pin),
+            Candidate cand = new Candidate(new SystemPin(c.g.busClassV(), c.candidate.pin().inverterId(), d.module().id(), job.p, pin,
+                    c.candidate.pin().generatorId()),
                     c.candidate.family(), c.candidate.inverterPrice(), d.modules(), d.module().price(), modules,
                     c.candidate.pvModulePrice(), c.candidate.controllers(), c.candidate.controllerPrice(), d.bankEnergyWh() / 1000.0,
-                    stc / 1000.0, Double.NaN);
+                    stc / 1000.0, Double.NaN, c.candidate.generatorPrice());
             String note = notes.isEmpty() ? "a smaller system of the chosen family (its own checks not repeated here)"
                     : String.join("; ", notes);
             r[j] = simulate(in, c.g, d, pv, pin == null ? 0 : pin.totalStrings(), cand, batteryTemp, note, 1.0, 1.0,
-                    SearchResult.Objective.CAPITAL);
+                    SearchResult.Objective.CAPITAL, c.gen);
         });
         out.addAll(List.of(r));
         return out;
@@ -756,7 +837,7 @@ public final class SystemSearch {
                     usable, needWh));
         }
         Evaluated e = simulate ? simulate(in, c.g, b, c.pv, c.pv.pin() == null ? 0 : c.pv.pin().totalStrings(), c.candidate,
-                batteryTemp, "", 1 + g, 1.0, SearchResult.Objective.CAPITAL) : null;
+                batteryTemp, "", 1 + g, 1.0, SearchResult.Objective.CAPITAL, c.gen) : null;
         double limit = in.maxUnmetFraction() * sum(in.loads().loadW()) * (1 + g);
         if (e != null && e.unmetWh() > limit + 1e-6) {
             fails.add(String.format(Locale.ROOT, "the simulated year leaves %.0f Wh unmet", e.unmetWh()));
@@ -768,7 +849,7 @@ public final class SystemSearch {
             double s = o.poorerSolarPct() / 100.0;
             List<String> sf = new ArrayList<>();
             Evaluated es = simulate(in, c.g, b, c.pv, c.pv.pin().totalStrings(), c.candidate, batteryTemp, "", 1.0, 1 - s,
-                    SearchResult.Objective.CAPITAL);
+                    SearchResult.Objective.CAPITAL, c.gen);
             double lim = in.maxUnmetFraction() * sum(in.loads().loadW());
             if (es.unmetWh() > lim + 1e-6) {
                 sf.add(String.format(Locale.ROOT, "the simulated year leaves %.0f Wh unmet", es.unmetWh()));
@@ -777,7 +858,7 @@ public final class SystemSearch {
                     c.pv.pin().controllers());
             int t = v.tightestMonth();
             double outWh = v.outputWhPerDay()[t] * (1 - s);
-            if (outWh < v.needWhPerDay()[t]) {
+            if (outWh < v.needWhPerDay()[t] && c.gen == null) {
                 sf.add(String.format(Locale.ROOT, "PV energy in the tightest month %.0f Wh/day < %.0f Wh/day needed", outWh,
                         v.needWhPerDay()[t]));
             }
@@ -786,6 +867,9 @@ public final class SystemSearch {
         }
         return out;
     }
+
+    /** The id of the PV array-power check (an advisory when a generator may cover the shortfall). */
+    private static final String ARRAY_POWER_ID = "array-power-vs-required";
 
     /** Least cost first, each with less unmet energy than every cheaper one. */
     static List<Evaluated> pareto(List<Evaluated> all) {

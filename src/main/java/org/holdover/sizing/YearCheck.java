@@ -43,10 +43,13 @@ import org.holdover.sim.YearSimulation;
  * @param unmetLimitWh    the unmet energy the project accepts over the year, Wh
  * @param bankScaleNeeded smallest multiple of the simulated bank that leaves no more than the limit unmet (NaN when
  *                        no bank up to {@value #MAX_SCALE} × does)
+ * @param generator       the engine generator as simulated (empty without one); with one, the charger is the
+ *                        generator's ({@link GeneratorPlan#chargerAcW}), also used by the grid in backup mode
  */
 public record YearCheck(BatteryBank bank, ChargeController controller, InverterLossModel inverter, Charger charger,
                         double[] loadW, double[] pvArrayW, boolean[] gridAvailable, boolean[] chargeForbidden,
-                        TracedYear traced, double unmetLimitWh, double bankScaleNeeded) {
+                        TracedYear traced, double unmetLimitWh, double bankScaleNeeded,
+                        java.util.Optional<org.holdover.sim.Generator> generator) {
 
     public static final double GRID_CHARGER_EFFICIENCY = 0.90;
     public static final double MAX_SCALE = 20;
@@ -126,8 +129,16 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
     public static YearCheck run(SizingInput in, BankDesign bankDesign, LossModel loss, EnergyBasis energy, double[] pvArrayW,
                                 double controllerEfficiency, double controllerLimitW, double unmetLimitFraction,
                                 double[] batteryTempC) {
+        return run(in, bankDesign, loss, energy, pvArrayW, controllerEfficiency, controllerLimitW, unmetLimitFraction, batteryTempC,
+                java.util.Optional.empty());
+    }
+
+    /** As {@link #run(SizingInput, BankDesign, LossModel, EnergyBasis, double[], double, double, double, double[])} with a generator. */
+    public static YearCheck run(SizingInput in, BankDesign bankDesign, LossModel loss, EnergyBasis energy, double[] pvArrayW,
+                                double controllerEfficiency, double controllerLimitW, double unmetLimitFraction,
+                                double[] batteryTempC, java.util.Optional<org.holdover.sim.Generator> generator) {
         Prepared p = prepare(in, bankDesign, loss, energy, pvArrayW, controllerEfficiency, controllerLimitW, unmetLimitFraction,
-                batteryTempC);
+                batteryTempC, generator);
         SystemDesign design = p.warmed();
         Chemistry c = bankDesign.module().chemistry();
         double[][] curve = c.cycleLife();
@@ -136,7 +147,7 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
         TracedYear traced = YearSimulation.runTraced(design, p.conditions(), life);
         double scale = scaleNeeded(design, p.conditions(), p.unmetLimitWh());
         return new YearCheck(design.battery(), design.controller(), design.inverter(), design.charger(), p.loadW(), p.pvArrayW(),
-                p.gridAvailable(), p.chargeForbidden(), traced, p.unmetLimitWh(), scale);
+                p.gridAvailable(), p.chargeForbidden(), traced, p.unmetLimitWh(), scale, generator);
     }
 
     /**
@@ -163,18 +174,6 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
         /** As {@link #quick()}, with analyses of the measured year (battery life, for one). */
         public SimulationMetrics quick(AnalysisOptions options) {
             return YearSimulation.run(warmed(), conditions, options);
-        }
-
-        /**
-         * The same system and conditions with another bank design: the bank as simulated and, in backup, the grid
-         * charger sized from its charging limit, exactly as {@link #prepare} builds them.
-         */
-        public Prepared withBankDesign(BankDesign d) {
-            BatteryBank bank = bank(d);
-            Charger charger = design.charger().maxAcInputW() > 0
-                    ? new Charger(bank.maxChargeW() / GRID_CHARGER_EFFICIENCY, GRID_CHARGER_EFFICIENCY) : Charger.NONE;
-            return new Prepared(new SystemDesign(design.controller(), design.inverter(), bank, charger, design.generator()),
-                    conditions, loadW, pvArrayW, gridAvailable, chargeForbidden, unmetLimitWh);
         }
 
         /** The same system under other conditions (load or PV scaled for a sensitivity case). */
@@ -225,18 +224,20 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
      * A system over a shared year (no copies: the search's path). The same design as
      * {@link #prepare(SizingInput, BankDesign, LossModel, EnergyBasis, double[], double, double, double, double[])}.
      *
-     * @param pvArrayW the PV array's DC output each hour (kept, not copied), or null without PV
+     * @param pvArrayW  the PV array's DC output each hour (kept, not copied), or null without PV
+     * @param generator the engine generator (empty without one)
      */
-    public static Prepared prepare(Year y, BankDesign bankDesign, LossModel loss, double[] pvArrayW, double controllerEfficiency,
-                                   double controllerLimitW) {
+    public static Prepared prepare(Year y, SizingInput in, BankDesign bankDesign, LossModel loss, double[] pvArrayW,
+                                   double controllerEfficiency, double controllerLimitW,
+                                   java.util.Optional<org.holdover.sim.Generator> generator) {
         BatteryBank first = bank(bankDesign);
         InverterLossModel inv = new InverterLossModel(loss.ratedW(), loss.p0(), loss.k1(), loss.k2());
         ChargeController cc = new ChargeController(controllerEfficiency, controllerLimitW);
-        Charger charger = y.backup() ? new Charger(first.maxChargeW() / GRID_CHARGER_EFFICIENCY, GRID_CHARGER_EFFICIENCY)
-                : Charger.NONE;
+        Charger charger = generator.isPresent() ? new Charger(GeneratorPlan.chargerAcW(in, bankDesign), GRID_CHARGER_EFFICIENCY)
+                : y.backup() ? new Charger(first.maxChargeW() / GRID_CHARGER_EFFICIENCY, GRID_CHARGER_EFFICIENCY) : Charger.NONE;
         double[] pv = pvArrayW == null ? new double[y.loadW().length] : pvArrayW;
         HourlyConditions cond = HourlyConditions.sharing(y.loadW(), pv, y.gridAvailable(), y.chargeForbidden());
-        SystemDesign design = new SystemDesign(cc, inv, first, charger, java.util.Optional.empty());
+        SystemDesign design = new SystemDesign(cc, inv, first, charger, generator);
         return new Prepared(design, cond, y.loadW(), pv, y.gridAvailable(), y.chargeForbidden(), y.unmetLimitWh());
     }
 
@@ -244,6 +245,14 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
     public static Prepared prepare(SizingInput in, BankDesign bankDesign, LossModel loss, EnergyBasis energy, double[] pvArrayW,
                                    double controllerEfficiency, double controllerLimitW, double unmetLimitFraction,
                                    double[] batteryTempC) {
+        return prepare(in, bankDesign, loss, energy, pvArrayW, controllerEfficiency, controllerLimitW, unmetLimitFraction,
+                batteryTempC, java.util.Optional.empty());
+    }
+
+    /** As {@link #prepare(SizingInput, BankDesign, LossModel, EnergyBasis, double[], double, double, double, double[])} with a generator. */
+    public static Prepared prepare(SizingInput in, BankDesign bankDesign, LossModel loss, EnergyBasis energy, double[] pvArrayW,
+                                   double controllerEfficiency, double controllerLimitW, double unmetLimitFraction,
+                                   double[] batteryTempC, java.util.Optional<org.holdover.sim.Generator> generator) {
         LoadAnalysis la = in.loads();
         int n = la.calendar().hours();
         Chemistry c = bankDesign.module().chemistry();
@@ -251,7 +260,8 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
         InverterLossModel inv = new InverterLossModel(loss.ratedW(), loss.p0(), loss.k1(), loss.k2());
         ChargeController cc = new ChargeController(controllerEfficiency, controllerLimitW);
         boolean backup = in.mode() == ProjectInput.Mode.BACKUP;
-        Charger charger = backup ? new Charger(first.maxChargeW() / GRID_CHARGER_EFFICIENCY, GRID_CHARGER_EFFICIENCY) : Charger.NONE;
+        Charger charger = generator.isPresent() ? new Charger(GeneratorPlan.chargerAcW(in, bankDesign), GRID_CHARGER_EFFICIENCY)
+                : backup ? new Charger(first.maxChargeW() / GRID_CHARGER_EFFICIENCY, GRID_CHARGER_EFFICIENCY) : Charger.NONE;
         double[] pv = pvArrayW == null ? new double[n] : pvArrayW.clone();
         boolean[] grid = new boolean[n];
         if (backup) {
@@ -265,7 +275,7 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
                 : HourlyConditions.chargeForbiddenBelow(batteryTempC, c.noChargeBelowC());
         HourlyConditions cond = HourlyConditions.offGrid(la.loadW(), pv).withGridAvailable(grid).withChargeForbidden(forbidden);
         double unmetLimit = unmetLimitFraction * sum(la.loadW());
-        SystemDesign design = new SystemDesign(cc, inv, first, charger, java.util.Optional.empty());
+        SystemDesign design = new SystemDesign(cc, inv, first, charger, generator);
         return new Prepared(design, cond, la.loadW().clone(), pv, grid, forbidden, unmetLimit);
     }
 

@@ -33,13 +33,14 @@ import org.junit.jupiter.api.TestInstance;
 class DemoWorkbooksTest {
 
     /**
-     * The two demos, and the two starter projects of {@code holdover init}: their loads repeat day after day, so
-     * months and outage windows tie exactly, which is where a spreadsheet's own summation order could pick
+     * The two demos, their lifetime-cost and generator variants (cycle charging and load following), and the two
+     * starter projects of {@code holdover init}: their loads repeat day after day, so months and outage windows tie exactly, which is where a spreadsheet's own summation order could pick
      * another month than the engine did.
      */
     static final List<String> DEMOS = List.of("examples/farm-shop-backup.yaml", "examples/ridge-cabin-offgrid.yaml",
             "src/main/resources/org/holdover/cli/starter-backup.yaml", "src/main/resources/org/holdover/cli/starter-off-grid.yaml",
-            "examples/variants/cabin-lifetime-cost.yaml");
+            "examples/variants/cabin-lifetime-cost.yaml", "examples/variants/cabin-generator.yaml",
+            "examples/variants/cabin-generator-load-following.yaml");
     private final List<Path> workbooks = new ArrayList<>();
 
     @BeforeAll
@@ -50,6 +51,11 @@ class DemoWorkbooksTest {
             var p = ProjectReader.read(project, demo);
             SizingResult r = Sizing.run(ProjectAssembler.assemble(p), ProjectAssembler.searchOptions(p.input(), null, null));
             assertThat(r.passes()).as(demo + " passes every check").isTrue();
+            if (demo.contains("generator")) {
+                // The generator variants exist to show a chosen system with a generator running in the simulated year.
+                assertThat(r.generator()).as(demo + " chooses a generator").isNotNull();
+                assertThat(r.year().metrics().generator().hours()).as(demo + " runs it").isPositive();
+            }
             Path out = dir.resolve(project.getFileName().toString().replace(".yaml", ".xlsx"));
             WorkbookWriter.write(r, out, true);
             workbooks.add(out);

@@ -203,4 +203,77 @@ class SystemSearchTest {
         assertThat(s.chosen().objective()).isGreaterThanOrEqualTo(c.cost());
         assertThat(c.cost()).isGreaterThanOrEqualTo(capital.chosen().candidate().cost());
     }
+
+    /**
+     * An invented 6 kW 230 V 50 Hz set priced low (test data, demo data style: no real product), so that a small array with
+     * it is cheaper than the array the PV sizing asks for.
+     */
+    static final org.holdover.catalog.GeneratorItem CHEAP_SET = new org.holdover.catalog.GeneratorItem("TEST-GEN-230-6000",
+            "Invented cheap 6 kW 230 V set (test data)", 6000, new org.holdover.inverter.AcOutput(230, List.of(50.0), false), 0.3,
+            new org.holdover.sim.FuelCurve(0.085, 0.25), 250);
+
+    /** The tight cabin with a generator allowed (cycle charging 30 % to 80 %, site at 1,450 m, a 2 kW charger). */
+    static SizingInput withGenerator(double autonomyDays, double maxUnmetFraction, org.holdover.catalog.GeneratorItem set) {
+        SizingInput in = tight(autonomyDays, maxUnmetFraction);
+        GeneratorRules rules = new GeneratorRules(true, new org.holdover.sim.DispatchStrategy.CycleCharging(0.8), 0.3,
+                1450, org.holdover.sim.GeneratorSizing.AltitudeDerating.TRADE_RULE, 2000, 1.6);
+        return in.withCatalog(in.catalog().withGenerators(List.of(set))).withGenerator(rules);
+    }
+
+    @Test
+    void aCheapGeneratorWithASmallArrayBeatsTheLargeArrayAndTheSearchAgreesWithBruteForce() {
+        SizingInput in = withGenerator(0.5, 0.0, CHEAP_SET);
+        List<Evaluated> all = SystemSearch.bruteForce(in, SearchResult.Objective.CAPITAL);
+        Map<String, Evaluated> firstOfFamily = new LinkedHashMap<>();
+        for (Evaluated e : all) {
+            if (e.passes()) {
+                firstOfFamily.putIfAbsent(e.candidate().family(), e);
+            }
+        }
+        List<Evaluated> expected = new ArrayList<>(firstOfFamily.values());
+        Evaluated best = expected.get(0);
+        // The same project without a generator: its least-cost passing system costs more, with a larger array.
+        Evaluated without = SystemSearch.bruteForce(tight(0.5, 0.0), SearchResult.Objective.CAPITAL).stream()
+                .filter(Evaluated::passes).findFirst().orElseThrow();
+        assertThat(best.candidate().pin().generatorId()).isEqualTo(CHEAP_SET.id());
+        assertThat(best.candidate().cost()).isLessThan(without.candidate().cost());
+        assertThat(best.candidate().pvKw()).isLessThan(without.candidate().pvKw());
+        // Systems without the generator are still candidates (the search may choose none).
+        assertThat(all).anyMatch(e -> e.candidate().pin().generatorId() == null);
+        SearchResult s = SystemSearch.run(in, SystemSearch.Options.defaults());
+        assertThat(s.chosen().candidate().pin()).isEqualTo(best.candidate().pin());
+        assertThat(s.chosen().candidate().cost()).isEqualTo(best.candidate().cost());
+        assertThat(s.chosen().unmetWh()).isCloseTo(best.unmetWh(), within(1e-6));
+        int n = Math.min(SystemSearch.DEFAULT_ALTERNATIVES, expected.size() - 1);
+        assertThat(s.alternatives()).hasSize(n);
+        for (int i = 0; i < n; i++) {
+            assertThat(s.alternatives().get(i).candidate().pin()).isEqualTo(expected.get(i + 1).candidate().pin());
+        }
+        // Capital cost includes the generator's price.
+        SearchResult.Candidate c = s.chosen().candidate();
+        assertThat(c.cost()).isCloseTo(c.inverterPrice() + c.bankModules() * c.bankModulePrice() + c.pvModules() * c.pvModulePrice()
+                + c.controllers() * c.controllerPrice() + CHEAP_SET.price(), within(1e-9));
+    }
+
+    @Test
+    void theChosenGeneratorSystemWrittenOutPassesItsChecksAndRunsTheGenerator() {
+        SizingInput in = withGenerator(0.5, 0.0, CHEAP_SET);
+        SizingResult r = Sizing.run(in);
+        assertThat(r.generator()).isNotNull();
+        assertThat(r.passes()).isTrue();
+        assertThat(r.checks()).extracting(Check::id).contains(GeneratorPlan.RATED).doesNotContain(PvSizing.ENERGY);
+        // The small array fails the worst-month energy check on its own: it is kept, as an advisory.
+        assertThat(r.advisories()).anyMatch(a -> a.id().equals(PvSizing.ENERGY) && !a.passes());
+        var g = r.year().metrics().generator();
+        assertThat(g.hours()).isPositive();
+        assertThat(g.starts()).isPositive().isLessThanOrEqualTo(g.hours());
+        assertThat(r.year().metrics().reliability().unmetWh())
+                .isCloseTo(r.search().chosen().unmetWh(), within(1e-6 * Math.max(1, r.search().chosen().unmetWh())));
+        // Fuel: the linear form (no-load term × rated kW + slope × output kWh) summed over the running hours, by hand from
+        // the year's generator output (FuelCurve's form, Skarstein and Uhlen 1989 as usually quoted, from memory).
+        double byHand = g.hours() * CHEAP_SET.fuel().noLoadLPerHPerRatedKw() * CHEAP_SET.ratedW() / 1000
+                + CHEAP_SET.fuel().slopeLPerKwh() * g.outputWh() / 1000;
+        assertThat(g.fuelL()).isCloseTo(byHand, within(1e-9 * byHand));
+        assertThat(r.fuelCostPerYear()).isCloseTo(1.6 * g.fuelL(), within(1e-9 * g.fuelL()));
+    }
 }
