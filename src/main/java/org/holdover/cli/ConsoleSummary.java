@@ -85,8 +85,9 @@ final class ConsoleSummary {
                 st.pruned(), st.stoppedEarly() ? "; STOPPED EARLY: the best system found so far" : "");
         boolean life = s.objective().lifetime();
         out.println(life ? String.format(Locale.ROOT, "    objective: lifetime cost over %.0f years at %.1f %% a year (demo prices;"
-                + " battery replaced at the end of its simulated life)", s.objective().horizonYears(), 100 * s.objective().discountRate())
-                : "    objective: capital cost (demo prices; inverter, battery modules, PV modules, controllers)");
+                + " battery replaced at the end of its simulated life, a generator's fuel at the project's price)",
+                s.objective().horizonYears(), 100 * s.objective().discountRate())
+                : "    objective: capital cost (demo prices; inverter, battery modules, PV modules, controllers, generator)");
         java.util.List<org.holdover.sizing.SearchResult.Evaluated> rows = new java.util.ArrayList<>();
         if (s.chosen() != null) {
             rows.add(s.chosen());
@@ -95,8 +96,9 @@ final class ConsoleSummary {
         for (int i = 0; i < rows.size(); i++) {
             var e = rows.get(i);
             out.printf(Locale.ROOT, "    %-7s %,9.0f  %s%s%n", i == 0 && s.chosen() != null ? "chosen" : "next", e.objective(),
-                    e.candidate().describe(), life ? String.format(Locale.ROOT, "; capital %,.0f, battery life %.1f years",
-                            e.candidate().cost(), e.lifeYears()) : "");
+                    e.candidate().describe(), life ? String.format(Locale.ROOT, "; capital %,.0f, battery life %.1f years%s",
+                            e.candidate().cost(), e.lifeYears(), e.fuelCostPerYear() > 0
+                                    ? String.format(Locale.ROOT, ", fuel %,.0f a year", e.fuelCostPerYear()) : "") : "");
         }
         int shown = 0;
         for (var j : s.rejected()) {

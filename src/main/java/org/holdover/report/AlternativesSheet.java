@@ -74,8 +74,8 @@ final class AlternativesSheet {
             s.input(r, 4, sr.objective().discountRate(), Styles.PCT);
             s.name("DiscountRate", r++, 4);
             s.text(r++, 0, "Lifetime cost = demo cost + the battery modules bought again each time the bank's life (rainflow"
-                    + " counting of the simulated year, or calendar life) runs out before the horizon, discounted to today.",
-                    ctx.styles.note);
+                    + " counting of the simulated year, or calendar life) runs out before the horizon, discounted to today"
+                    + " + a generator's fuel a year × the annuity factor (1 − (1 + r)^−years) ÷ r.", ctx.styles.note);
         } else {
             s.text(r++, 0, "Objective: least demo capital cost.");
         }
@@ -96,6 +96,9 @@ final class AlternativesSheet {
         }
         if (sr.generatorsSearched()) {
             wrappedHeader(ctx, s, r, GEN_ID, "Generator", "Generator price");
+            if (sr.objective().lifetime()) {
+                wrappedHeader(ctx, s, r, FUEL, "Fuel cost a year (simulated)");
+            }
         }
         r++;
         int first = r;
@@ -145,7 +148,7 @@ final class AlternativesSheet {
             s.text(r++, 5, j.reason());
         }
         s.sheet.setColumnWidth(0, 22 * 256);
-        for (int c = 1; c < GEN_ID + 2; c++) {
+        for (int c = 1; c <= FUEL; c++) {
             s.sheet.setColumnWidth(c, 9 * 256);
         }
         for (int c : new int[] {2, 4, 9, 15}) {
@@ -174,6 +177,8 @@ final class AlternativesSheet {
 
     /** Columns of the generator and its price (only when the search may add a generator). */
     static final int GEN_ID = 26;
+    /** Column of the generator's fuel cost a year (lifetime objective with generators). */
+    static final int FUEL = 28;
 
     private static void row(SheetWriter s, int r, String label, SearchResult.Evaluated e, SearchResult sr) {
         SearchResult.Candidate c = e.candidate();
@@ -220,8 +225,15 @@ final class AlternativesSheet {
             s.input(r, 24, e.lifeYears(), Styles.D1);
             String n = "MAX(0,-INT(-(CostHorizonY/Y" + R + "-1E-9))-1)";
             String q = "(1+DiscountRate)^(-Y" + R + ")";
+            String fuel = "";
+            if (gen) {
+                // The year's fuel cost (engine: simulated fuel × price) × the annuity factor over the horizon.
+                s.input(r, FUEL, Double.isFinite(e.fuelCostPerYear()) ? e.fuelCostPerYear() : 0, Styles.INT);
+                fuel = "+" + SheetWriter.col(FUEL) + R
+                        + "*IF(DiscountRate=0,CostHorizonY,(1-(1+DiscountRate)^(-CostHorizonY))/DiscountRate)";
+            }
             s.formula(r, 25, "S" + R + "+F" + R + "*G" + R + "*IF(" + n + "=0,0,IF(DiscountRate=0," + n + "," + q + "*(1-" + q + "^" + n
-                    + ")/(1-" + q + ")))", e.objective(), Styles.INT);
+                    + ")/(1-" + q + ")))" + fuel, e.objective(), Styles.INT);
         }
     }
 

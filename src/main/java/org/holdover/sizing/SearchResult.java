@@ -88,10 +88,12 @@ public record SearchResult(Evaluated chosen, List<Evaluated> alternatives, List<
      * @param passes      passes every check and the simulated year
      * @param designNote  "" for a system that passes the design checks; otherwise which one it fails (frontier only)
      * @param lifeYears   battery life used for replacements, years (NaN when the objective is capital cost)
-     * @param objective   what the search minimises: the capital cost, or the lifetime cost with replacements
+     * @param objective   what the search minimises: the capital cost, or the lifetime cost with replacements and fuel
+     * @param fuelCostPerYear the generator's fuel over the simulated year × the project's fuel price (0 without a
+     *                    generator or a price; NaN when not simulated)
      */
     public record Evaluated(Candidate candidate, double unmetWh, int unmetHours, double lowestSoc, boolean passes,
-                            String designNote, double lifeYears, double objective) {
+                            String designNote, double lifeYears, double objective, double fuelCostPerYear) {
     }
 
     /** A family left out and why. */
@@ -134,7 +136,8 @@ public record SearchResult(Evaluated chosen, List<Evaluated> alternatives, List<
      *
      * @param horizonYears  0: the capital cost; otherwise the lifetime cost over this many years: capital + the battery
      *                      modules bought again each time the bank's life (from the simulated year) runs out before the
-     *                      horizon, each discounted to today
+     *                      horizon, each discounted to today, + the generator's fuel each year (the simulated year's
+     *                      fuel × the fuel price) discounted to today
      * @param discountRate  discount rate per year, fraction
      */
     public record Objective(double horizonYears, double discountRate) {
@@ -168,9 +171,28 @@ public record SearchResult(Evaluated chosen, List<Evaluated> alternatives, List<
             return sum;
         }
 
-        /** The objective of a candidate whose battery lasts {@code lifeYears}. */
+        /** The objective of a candidate whose battery lasts {@code lifeYears} (no running cost). */
         public double of(Candidate c, double lifeYears) {
-            return c.cost() + replacementCost(c.bankModules() * c.bankModulePrice(), lifeYears);
+            return of(c, lifeYears, 0);
+        }
+
+        /**
+         * The objective of a candidate whose battery lasts {@code lifeYears} and that spends {@code costPerYear} on
+         * fuel each year (capital cost alone when the objective is capital).
+         */
+        public double of(Candidate c, double lifeYears, double costPerYear) {
+            if (!lifetime()) {
+                return c.cost();
+            }
+            return c.cost() + replacementCost(c.bankModules() * c.bankModulePrice(), lifeYears) + costPerYear * annuityFactor();
+        }
+
+        /**
+         * Present value of 1 a year at the end of each year over the horizon: (1 − (1 + r)^−H) ÷ r, or H without
+         * discounting (the ordinary annuity factor of engineering economics; common practice).
+         */
+        public double annuityFactor() {
+            return discountRate == 0 ? horizonYears : (1 - Math.pow(1 + discountRate, -horizonYears)) / discountRate;
         }
     }
 }

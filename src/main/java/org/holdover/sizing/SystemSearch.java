@@ -305,7 +305,7 @@ public final class SystemSearch {
     private static Evaluated unsimulated(Cand c, SearchResult.Objective objective) {
         double life = c.bank.design().module().chemistry().calendarLifeYears();
         return new Evaluated(c.candidate, Double.NaN, 0, Double.NaN, true, "", objective.lifetime() ? life : Double.NaN,
-                objective.of(c.candidate, life));
+                objective.of(c.candidate, life), 0);
     }
 
     /** Enough found: {@code wanted} families have a passing system, and no later candidate can beat the last of them. */
@@ -418,7 +418,7 @@ public final class SystemSearch {
         YearCheck.Year y = cache.year(in, c.g, batteryTemp);
         YearCheck.Prepared p = YearCheck.prepare(y, in, c.bank.design(), c.g.inverter().spec().loss(), c.pv.seriesW(strings),
                 c.pv.efficiency(), c.pv.limitW(), c.gen == null ? java.util.Optional.empty() : java.util.Optional.of(c.gen.sim()));
-        return evaluate(p, c.bank.design(), c.candidate, designNote, y.unmetLimitWh(), objective);
+        return evaluate(p, c.bank.design(), c.candidate, designNote, y.unmetLimitWh(), objective, fuelPrice(in));
     }
 
     /** The shared year of each group (inverter and battery module). */
@@ -453,11 +453,16 @@ public final class SystemSearch {
             p = p.withConditions(cond, load, sun);
             limit = in.maxUnmetFraction() * sum(load);
         }
-        return evaluate(p, bank, cand, designNote, limit, objective);
+        return evaluate(p, bank, cand, designNote, limit, objective, fuelPrice(in));
+    }
+
+    /** The project's fuel price per litre (0 when not given). */
+    private static double fuelPrice(SizingInput in) {
+        return in.generator() == null ? 0 : in.generator().fuelPricePerL();
     }
 
     private static Evaluated evaluate(YearCheck.Prepared p, BankDesign bank, Candidate cand, String designNote, double limit,
-                                      SearchResult.Objective objective) {
+                                      SearchResult.Objective objective, double fuelPricePerL) {
         org.holdover.battery.Chemistry chem = bank.module().chemistry();
         SimulationMetrics m;
         double life = Double.NaN;
@@ -471,8 +476,9 @@ public final class SystemSearch {
         }
         double unmet = m.reliability().unmetWh();
         boolean passes = designNote.isEmpty() && unmet <= limit + 1e-6;
+        double fuelCost = m.generator().fuelL() * fuelPricePerL;
         return new Evaluated(cand, unmet, m.reliability().unmetHours(), m.battery().lowestSoc(), passes, designNote, life,
-                objective.of(cand, life));
+                objective.of(cand, life, fuelCost), fuelCost);
     }
 
     private record Work(List<Cand> candidates, List<Rejection> rejected, int families, long cheapChecks) {

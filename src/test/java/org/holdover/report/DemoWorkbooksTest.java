@@ -40,7 +40,7 @@ class DemoWorkbooksTest {
     static final List<String> DEMOS = List.of("examples/farm-shop-backup.yaml", "examples/ridge-cabin-offgrid.yaml",
             "src/main/resources/org/holdover/cli/starter-backup.yaml", "src/main/resources/org/holdover/cli/starter-off-grid.yaml",
             "examples/variants/cabin-lifetime-cost.yaml", "examples/variants/cabin-generator.yaml",
-            "examples/variants/cabin-generator-load-following.yaml");
+            "examples/variants/cabin-generator-load-following.yaml", "examples/variants/cabin-generator-lifetime.yaml");
     private final List<Path> workbooks = new ArrayList<>();
 
     @BeforeAll

@@ -169,6 +169,11 @@ class SystemSearchTest {
         assertThat(o.replacementCost(1000, 15)).isCloseTo(1000 / 2.0789281794113688, within(1e-9)); // 1.05^15
         assertThat(o.replacementCost(1000, 10)).isCloseTo(1000 / 1.628894626777442 + 1000 / 2.653297705144422, within(1e-9));
         assertThat(new SearchResult.Objective(25, 0).replacementCost(1000, 10)).isEqualTo(2000);
+        // Ordinary annuity factor (1 − (1 + r)^−n) ÷ r: 25 years at 5 % = 14.0939 (engineering-economics tables;
+        // 1.05^−25 = 0.295303), and n itself without discounting.
+        assertThat(o.annuityFactor()).isCloseTo((1 - 1 / 3.3863549408993885) / 0.05, within(1e-12));
+        assertThat(o.annuityFactor()).isCloseTo(14.0939, within(1e-4));
+        assertThat(new SearchResult.Objective(25, 0).annuityFactor()).isEqualTo(25);
         assertThat(SearchResult.Objective.CAPITAL.replacementCost(1000, 1)).isZero();
     }
 
@@ -275,5 +280,35 @@ class SystemSearchTest {
                 + CHEAP_SET.fuel().slopeLPerKwh() * g.outputWh() / 1000;
         assertThat(g.fuelL()).isCloseTo(byHand, within(1e-9 * byHand));
         assertThat(r.fuelCostPerYear()).isCloseTo(1.6 * g.fuelL(), within(1e-9 * g.fuelL()));
+    }
+
+    @Test
+    void theLifetimeObjectiveCountsTheGeneratorsFuelAndAgreesWithBruteForce() {
+        SizingInput in = withGenerator(0.5, 0.0, CHEAP_SET);
+        SearchResult.Objective obj = new SearchResult.Objective(20, 0.06);
+        List<Evaluated> all = SystemSearch.bruteForce(in, obj);
+        Evaluated best = null;
+        for (Evaluated e : all) {
+            if (e.passes() && (best == null || e.objective() < best.objective())) {
+                best = e;
+            }
+        }
+        SearchResult s = SystemSearch.run(in, SystemSearch.Options.defaults().withObjective(obj));
+        assertThat(s.chosen().candidate().pin()).isEqualTo(best.candidate().pin());
+        assertThat(s.chosen().objective()).isCloseTo(best.objective(), within(1e-6));
+        // Every system with the generator that burns fuel carries its fuel over the horizon in the objective, by hand.
+        double annuity = (1 - Math.pow(1.06, -20)) / 0.06;
+        Evaluated burning = all.stream().filter(e -> e.fuelCostPerYear() > 0).findFirst().orElseThrow();
+        SearchResult.Candidate c = burning.candidate();
+        double replacements = 0;
+        for (int k = 1; k * burning.lifeYears() < 20 - 1e-9; k++) {
+            replacements += c.bankModules() * c.bankModulePrice() / Math.pow(1.06, k * burning.lifeYears());
+        }
+        assertThat(burning.objective()).isCloseTo(c.cost() + replacements + burning.fuelCostPerYear() * annuity, within(1e-6));
+        // With fuel priced in, the lifetime choice is never cheaper over the years than the capital choice is.
+        SearchResult capital = SystemSearch.run(in, SystemSearch.Options.defaults());
+        Evaluated capitalAsLifetime = all.stream().filter(e -> e.candidate().pin().equals(capital.chosen().candidate().pin()))
+                .findFirst().orElseThrow();
+        assertThat(s.chosen().objective()).isLessThanOrEqualTo(capitalAsLifetime.objective() + 1e-6);
     }
 }
