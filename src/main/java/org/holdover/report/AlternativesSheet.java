@@ -4,10 +4,6 @@ import java.util.ArrayList;
 import java.util.List;
 import org.apache.poi.xddf.usermodel.chart.MarkerStyle;
 import org.apache.poi.xddf.usermodel.PresetColor;
-import org.apache.poi.xddf.usermodel.XDDFColor;
-import org.apache.poi.xddf.usermodel.XDDFLineProperties;
-import org.apache.poi.xddf.usermodel.XDDFShapeProperties;
-import org.apache.poi.xddf.usermodel.XDDFSolidFillProperties;
 import org.apache.poi.xddf.usermodel.chart.AxisCrosses;
 import org.apache.poi.xddf.usermodel.chart.AxisPosition;
 import org.apache.poi.xddf.usermodel.chart.ChartTypes;
@@ -262,14 +258,7 @@ final class AlternativesSheet {
         data.setStyle(ScatterStyle.LINE_MARKER);
         XDDFScatterChartData.Series series = (XDDFScatterChartData.Series) data.addSeries(xsrc, ysrc);
         series.setTitle("Frontier", null);
-        series.setMarkerStyle(MarkerStyle.CIRCLE);
-        series.setSmooth(false);
-        XDDFShapeProperties line = new XDDFShapeProperties();
-        XDDFLineProperties lp = new XDDFLineProperties();
-        lp.setFillProperties(new XDDFSolidFillProperties(XDDFColor.from(PresetColor.STEEL_BLUE)));
-        lp.setWidth(1.5);
-        line.setLineProperties(lp);
-        series.setShapeProperties(line);
+        Charts.line(series, MarkerStyle.CIRCLE, PresetColor.STEEL_BLUE, 1.5);
         chart.plot(data);
     }
 }

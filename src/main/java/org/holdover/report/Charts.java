@@ -38,6 +38,21 @@ final class Charts {
     private Charts() {
     }
 
+    /**
+     * A scatter series drawn as a straight-segment line of one colour (LibreOffice draws no line without explicit line
+     * properties).
+     */
+    static void line(XDDFScatterChartData.Series series, MarkerStyle marker, PresetColor color, double widthPt) {
+        series.setMarkerStyle(marker);
+        series.setSmooth(false);
+        XDDFShapeProperties shape = new XDDFShapeProperties();
+        XDDFLineProperties lp = new XDDFLineProperties();
+        lp.setFillProperties(new XDDFSolidFillProperties(XDDFColor.from(color)));
+        lp.setWidth(widthPt);
+        shape.setLineProperties(lp);
+        series.setShapeProperties(shape);
+    }
+
     private static XSSFDrawing drawing(SheetWriter s) {
         SXSSFSheet sheet = (SXSSFSheet) s.sheet;
         sheet.createDrawingPatriarch();
@@ -118,14 +133,7 @@ final class Charts {
         data.setStyle(ScatterStyle.LINE);
         XDDFScatterChartData.Series series = (XDDFScatterChartData.Series) data.addSeries(xsrc, ysrc);
         series.setTitle("State of charge", null);
-        series.setMarkerStyle(MarkerStyle.NONE);
-        series.setSmooth(false);
-        XDDFShapeProperties line = new XDDFShapeProperties();
-        XDDFLineProperties lp = new XDDFLineProperties();
-        lp.setFillProperties(new XDDFSolidFillProperties(XDDFColor.from(PresetColor.STEEL_BLUE)));
-        lp.setWidth(1.5);
-        line.setLineProperties(lp);
-        series.setShapeProperties(line);
+        line(series, MarkerStyle.NONE, PresetColor.STEEL_BLUE, 1.5);
         chart.plot(data);
     }
 
@@ -202,14 +210,7 @@ final class Charts {
         points.setShapeProperties(none);
         XDDFScatterChartData.Series model = (XDDFScatterChartData.Series) data.addSeries(xs, ms);
         model.setTitle("Loss model", null);
-        model.setMarkerStyle(MarkerStyle.NONE);
-        model.setSmooth(false);
-        XDDFShapeProperties line = new XDDFShapeProperties();
-        XDDFLineProperties lp = new XDDFLineProperties();
-        lp.setFillProperties(new XDDFSolidFillProperties(XDDFColor.from(PresetColor.DARK_ORANGE)));
-        lp.setWidth(2.0);
-        line.setLineProperties(lp);
-        model.setShapeProperties(line);
+        line(model, MarkerStyle.NONE, PresetColor.DARK_ORANGE, 2.0);
         chart.plot(data);
     }
 
