@@ -43,6 +43,11 @@ public record BankDesign(BatteryModule module, BankRequirement requirement, int 
         return bankNominalV * bankAh();
     }
 
+    /** Usable energy after depth of discharge, temperature, aging and rate, Wh (what the sizing chain checks). */
+    public double usableWh() {
+        return bankAh() * bankNominalV * requirement.depthOfDischarge() / (temperatureFactor * agingFactor * rateFactor);
+    }
+
     /** Demo price of the bank. */
     public double price() {
         return modules() * module.price();

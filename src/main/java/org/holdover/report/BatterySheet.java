@@ -162,8 +162,7 @@ final class BatterySheet {
             s.formulaText(r, FEASIBLE, "IF(AA" + R + "<=AB" + R + ",\"yes\",\"no\")", b.feasible() ? "yes" : "no");
             s.formula(r, KWH, "N" + R + "*(AA" + R + "*D" + R + ")/1000", b.bankEnergyWh() / 1000.0, Styles.D2);
             s.formula(r, COST, "M" + R + "*AA" + R + "*K" + R, b.price(), Styles.INT);
-            double usable = b.bankAh() * b.bankNominalV() * req(b).depthOfDischarge()
-                    / (b.temperatureFactor() * b.agingFactor() * b.rateFactor());
+            double usable = b.usableWh();
             s.formula(r, USABLE, "(AA" + R + "*D" + R + ")*N" + R + "*O" + R + "/(Q" + R + "*R" + R + "*V" + R + ")", usable, Styles.INT);
             s.formula(r, ABS_V, "M" + R + "*L" + R + "*INDEX(ChemAbsV," + chem + ")", b.absorptionV(), Styles.D1);
             s.formula(r, END_V, "M" + R + "*L" + R + "*INDEX(ChemEndV," + chem + ")", b.endV(), Styles.D1);

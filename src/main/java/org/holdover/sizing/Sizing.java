@@ -375,8 +375,7 @@ public final class Sizing {
                     Math.max(s.dcMinV(), b.endV()), s.minDcForAcPeakV(), "V", Check.Sense.AT_LEAST,
                     "√2 × AC RMS ÷ maximum modulation index (transformerless bridge)"));
         }
-        double usable = b.bankAh() * b.bankNominalV() * b.requirement().depthOfDischarge()
-                / (b.temperatureFactor() * b.agingFactor() * b.rateFactor());
+        double usable = b.usableWh();
         checks.add(new Check("bank.energy", "Usable energy after depth of discharge, temperature, aging and rate",
                 usable, e.energyDcWh(), "Wh", Check.Sense.AT_LEAST, "battery sizing chain"));
         return checks;

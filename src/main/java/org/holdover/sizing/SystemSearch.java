@@ -835,8 +835,7 @@ public final class SystemSearch {
                     f.runningPeakW() * (1 + g)));
         }
         BankDesign b = c.bank.design();
-        double usable = b.bankAh() * b.bankNominalV() * b.requirement().depthOfDischarge()
-                / (b.temperatureFactor() * b.agingFactor() * b.rateFactor());
+        double usable = b.usableWh();
         double needWh = c.g.energy().energyDcWh() * (1 + g);
         if (usable < needWh) {
             fails.add(String.format(Locale.ROOT, "usable battery energy %.0f Wh < %.0f Wh (the chain's DC energy scaled with the load)",

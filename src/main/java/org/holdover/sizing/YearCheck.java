@@ -253,30 +253,10 @@ public record YearCheck(BatteryBank bank, ChargeController controller, InverterL
     public static Prepared prepare(SizingInput in, BankDesign bankDesign, LossModel loss, EnergyBasis energy, double[] pvArrayW,
                                    double controllerEfficiency, double controllerLimitW, double unmetLimitFraction,
                                    double[] batteryTempC, java.util.Optional<org.holdover.sim.Generator> generator) {
-        LoadAnalysis la = in.loads();
-        int n = la.calendar().hours();
-        Chemistry c = bankDesign.module().chemistry();
-        BatteryBank first = bank(bankDesign);
-        InverterLossModel inv = new InverterLossModel(loss.ratedW(), loss.p0(), loss.k1(), loss.k2());
-        ChargeController cc = new ChargeController(controllerEfficiency, controllerLimitW);
-        boolean backup = in.mode() == ProjectInput.Mode.BACKUP;
-        Charger charger = generator.isPresent() ? new Charger(GeneratorPlan.chargerAcW(in, bankDesign), GRID_CHARGER_EFFICIENCY)
-                : backup ? new Charger(first.maxChargeW() / GRID_CHARGER_EFFICIENCY, GRID_CHARGER_EFFICIENCY) : Charger.NONE;
-        double[] pv = pvArrayW == null ? new double[n] : pvArrayW.clone();
-        boolean[] grid = new boolean[n];
-        if (backup) {
-            Arrays.fill(grid, true);
-            for (int h = energy.windowStartHour(); h < energy.windowStartHour() + energy.windowHours(); h++) {
-                grid[h] = false;
-            }
-        }
-        // A chemistry without a cold-charging limit (lead-acid: −∞) is never stopped from charging.
-        boolean[] forbidden = batteryTempC == null || !Double.isFinite(c.noChargeBelowC()) ? new boolean[n]
-                : HourlyConditions.chargeForbiddenBelow(batteryTempC, c.noChargeBelowC());
-        HourlyConditions cond = HourlyConditions.offGrid(la.loadW(), pv).withGridAvailable(grid).withChargeForbidden(forbidden);
-        double unmetLimit = unmetLimitFraction * sum(la.loadW());
-        SystemDesign design = new SystemDesign(cc, inv, first, charger, generator);
-        return new Prepared(design, cond, la.loadW().clone(), pv, grid, forbidden, unmetLimit);
+        // The same year the search shares, built afresh, with the caller's PV series copied.
+        Year y = year(in, bankDesign.module().chemistry(), energy, unmetLimitFraction, batteryTempC);
+        return prepare(y, in, bankDesign, loss, pvArrayW == null ? null : pvArrayW.clone(), controllerEfficiency, controllerLimitW,
+                generator);
     }
 
     /** Smallest bank multiple (bisection, 1 % resolution) leaving at most the limit unmet; NaN when none up to the maximum. */
