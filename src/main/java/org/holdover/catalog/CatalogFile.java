@@ -65,11 +65,12 @@ public record CatalogFile(String name, Boolean demoData, String note, List<Inver
      * @param topology           transformer, transformerless-boost or transformerless-direct
      * @param maxModulationIndex highest modulation index (transformerless-direct), default 0.95
      * @param price              demo price
+     * @param maxInParallel      most identical units that may run in parallel on one output (default 1: not built for it)
      */
     public record InverterEntry(String id, String description, Double busClassV, WindowEntry dcWindowV, AcEntry ac,
                                 Double continuousW, Double continuousVa, Double perLegVa, List<SurgeEntry> surge,
                                 DeratingEntry derating, List<EfficiencyEntry> efficiency, Double noLoadW,
-                                String topology, Double maxModulationIndex, Double price) {
+                                String topology, Double maxModulationIndex, Double price, Integer maxInParallel) {
     }
 
     /** @param min lowest, V; @param max highest, V */

@@ -46,6 +46,8 @@ public final class CatalogReader {
     public static final String BUILTIN_RESOURCE = "demo-catalog.yaml";
     /** Display name of the built-in catalog. */
     public static final String BUILTIN_DISPLAY = "<built-in demo catalog>";
+    /** Largest count of one inverter in parallel a catalog may allow. */
+    public static final int MAX_INVERTERS_IN_PARALLEL = 12;
     /** Most surge ratings per inverter (the workbook has three slots). */
     public static final int MAX_SURGE_RATINGS = 3;
 
@@ -546,6 +548,15 @@ public final class CatalogReader {
             }
         }
         Double price = nonNegative(p + ".price", e.price(), 1e8);
+        int inParallel = 1;
+        if (e.maxInParallel() != null) {
+            if (e.maxInParallel() < 1 || e.maxInParallel() > MAX_INVERTERS_IN_PARALLEL) {
+                problem(p + ".maxInParallel", "must be 1–" + MAX_INVERTERS_IN_PARALLEL + ", got " + e.maxInParallel(),
+                        "1 when the unit cannot share its output with others");
+            } else {
+                inParallel = e.maxInParallel();
+            }
+        }
         if (problems.size() > before || id == null || bus == null || min == null || max == null || ac == null
                 || w == null || va == null || noLoad == null || price == null) {
             return null;
@@ -558,7 +569,7 @@ public final class CatalogReader {
             return null;
         }
         return new InverterSpec(id, e.description() == null ? id : e.description(), bus, min, max, ac, w, va, perLeg,
-                surge, deratingStart, deratingPct, points, noLoad, topology, mod, price, loss);
+                surge, deratingStart, deratingPct, points, noLoad, topology, mod, price, loss, inParallel);
     }
 
     private BatteryModule module(ModuleEntry e, String p, Set<String> ids) {

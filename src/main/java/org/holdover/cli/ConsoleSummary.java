@@ -39,7 +39,7 @@ final class ConsoleSummary {
             search(r, out);
         } else {
             BankDesign b = r.bank();
-            out.printf(Locale.ROOT, "  bus: %.0f V    inverter: %s (%s)%n", r.chosen().busClassV(), r.inverter().spec().id(),
+            out.printf(Locale.ROOT, "  bus: %.0f V    inverter: %s (%s)%n", r.chosen().busClassV(), r.inverter().spec().label(),
                     r.inverter().spec().description());
             out.printf(Locale.ROOT, "  battery: %d × %s (%d in series × %d strings), %.1f kWh rated at %.1f V%n",
                     b.modules(), b.module().id(), b.series(), b.strings(), b.bankEnergyWh() / 1000.0, b.bankNominalV());
@@ -87,7 +87,7 @@ final class ConsoleSummary {
         out.println(life ? String.format(Locale.ROOT, "    objective: lifetime cost over %.0f years at %.1f %% a year (demo prices;"
                 + " battery replaced at the end of its simulated life, a generator's fuel at the project's price)",
                 s.objective().horizonYears(), 100 * s.objective().discountRate())
-                : "    objective: capital cost (demo prices; inverter, battery modules, PV modules, controllers, generator)");
+                : "    objective: capital cost (demo prices; inverters, battery modules, PV modules, controllers, generator)");
         java.util.List<org.holdover.sizing.SearchResult.Evaluated> rows = new java.util.ArrayList<>();
         if (s.chosen() != null) {
             rows.add(s.chosen());

@@ -25,12 +25,16 @@ import java.util.Objects;
  * @param maxModulationIndex highest modulation index of a transformerless bridge (peak AC ÷ DC), (0, 1.2]
  * @param price              demo price, currency units
  * @param loss               the loss model fitted to the points
+ * @param maxInParallel      most identical units its maker allows to run in parallel on one output (1: not built for it)
+ * @param units              identical units in parallel that this spec describes (1 for a catalog unit)
+ * @param unit               the catalog unit when {@code units > 1}, else null
  */
 public record InverterSpec(String id, String description, double busClassV, double dcMinV, double dcMaxV,
                            AcOutput ac, double continuousW, double continuousVa, double perLegVa,
                            List<SurgeRating> surge, double deratingStartC, double deratingPctPerC,
                            List<EfficiencyPoint> efficiencyPoints, double noLoadW, Topology topology,
-                           double maxModulationIndex, double price, LossModel loss) {
+                           double maxModulationIndex, double price, LossModel loss, int maxInParallel, int units,
+                           InverterSpec unit) {
 
     /** How the inverter makes AC from DC. */
     public enum Topology {
@@ -64,6 +68,63 @@ public record InverterSpec(String id, String description, double busClassV, doub
         if (deratingPctPerC < 0) {
             throw new IllegalArgumentException(id + ": derating must be >= 0 %/°C");
         }
+        if (maxInParallel < 1 || units < 1 || units > maxInParallel || (units == 1) != (unit == null)) {
+            throw new IllegalArgumentException(id + ": units must be 1 to " + maxInParallel + ", with the catalog unit when more than 1");
+        }
+    }
+
+    /** A catalog unit that does not run in parallel. */
+    public InverterSpec(String id, String description, double busClassV, double dcMinV, double dcMaxV,
+                        AcOutput ac, double continuousW, double continuousVa, double perLegVa,
+                        List<SurgeRating> surge, double deratingStartC, double deratingPctPerC,
+                        List<EfficiencyPoint> efficiencyPoints, double noLoadW, Topology topology,
+                        double maxModulationIndex, double price, LossModel loss) {
+        this(id, description, busClassV, dcMinV, dcMaxV, ac, continuousW, continuousVa, perLegVa, surge, deratingStartC,
+                deratingPctPerC, efficiencyPoints, noLoadW, topology, maxModulationIndex, price, loss, 1, 1, null);
+    }
+
+    /** A catalog unit that may run with up to {@code maxInParallel} identical units. */
+    public InverterSpec(String id, String description, double busClassV, double dcMinV, double dcMaxV,
+                        AcOutput ac, double continuousW, double continuousVa, double perLegVa,
+                        List<SurgeRating> surge, double deratingStartC, double deratingPctPerC,
+                        List<EfficiencyPoint> efficiencyPoints, double noLoadW, Topology topology,
+                        double maxModulationIndex, double price, LossModel loss, int maxInParallel) {
+        this(id, description, busClassV, dcMinV, dcMaxV, ac, continuousW, continuousVa, perLegVa, surge, deratingStartC,
+                deratingPctPerC, efficiencyPoints, noLoadW, topology, maxModulationIndex, price, loss, maxInParallel, 1, null);
+    }
+
+    /**
+     * {@code n} identical units of this catalog unit in parallel on one AC output, sharing the load equally: every rating
+     * (continuous W and VA, per leg, each surge rating), the no-load draw and the price are n times the unit's; the DC
+     * window, derating and efficiency per unit of load are the unit's. With equal sharing the loss model of the n units is
+     * the unit's with n times the rating: n × (P/n + R·loss(P/(n·R))) = P + n·R·loss(P/(n·R)), so p0, k1 and k2 stay.
+     * Every unit is taken to stay on (no unit sleeps at light load), which counts the most no-load draw.
+     *
+     * @param n units, 1 to {@link #maxInParallel()}
+     */
+    public InverterSpec inParallel(int n) {
+        InverterSpec u = catalogUnit();
+        if (n == 1) {
+            return u;
+        }
+        if (n < 1 || n > u.maxInParallel) {
+            throw new IllegalArgumentException(u.id + ": " + n + " units in parallel, the catalog allows 1 to " + u.maxInParallel);
+        }
+        List<SurgeRating> s = u.surge.stream().map(r -> new SurgeRating(r.durationS(), n * r.va())).toList();
+        LossModel l = new LossModel(n * u.loss.ratedW(), u.loss.p0(), u.loss.k1(), u.loss.k2());
+        return new InverterSpec(u.id, u.description, u.busClassV, u.dcMinV, u.dcMaxV, u.ac, n * u.continuousW,
+                n * u.continuousVa, n * u.perLegVa, s, u.deratingStartC, u.deratingPctPerC, u.efficiencyPoints, n * u.noLoadW,
+                u.topology, u.maxModulationIndex, n * u.price, l, u.maxInParallel, n, u);
+    }
+
+    /** The single catalog unit (this spec when it is one). */
+    public InverterSpec catalogUnit() {
+        return unit == null ? this : unit;
+    }
+
+    /** The id, with the unit count when more than one: "ID" or "2 × ID". */
+    public String label() {
+        return units == 1 ? id : units + " × " + id;
     }
 
     /**

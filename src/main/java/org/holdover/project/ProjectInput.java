@@ -208,16 +208,21 @@ public record ProjectInput(
      * @param costHorizonYears       when given, the search minimises the lifetime cost over this many years (battery
      *                               replacements included) instead of the capital cost
      * @param discountRatePct        discount rate for the lifetime cost, % per year (default 0)
+     * @param maxInvertersInParallel most identical inverters in parallel the sizing may use (default 4; each unit's
+     *                               catalog limit applies too)
      */
     public record RulesInput(Double inverterMargin, Double maxBatteryCurrentA, Integer motorsStartingTogether,
                              Integer maxParallelStrings, Double busVoltageV, Double maxUnmetPct, Integer alternatives,
-                             Double loadGrowthPct, Double poorerSolarPct, Double costHorizonYears, Double discountRatePct) {
+                             Double loadGrowthPct, Double poorerSolarPct, Double costHorizonYears, Double discountRatePct,
+                             Integer maxInvertersInParallel) {
     }
 
     /**
      * @param batteryToInverterM   one-way cable length between battery and inverter, m
      * @param batteryToControllerM one-way cable length between battery and charge controller, m
      * @param pvToControllerM      one-way length of the PV output circuit to the controller, m
+     * @param busBarToInverterM    one-way length of each inverter's own leads from the common DC bus bar (inverters in
+     *                             parallel), m
      * @param maxVoltageDropPct    voltage-drop limit for DC circuits, %
      * @param conductorAmbientC    ambient around the conductors, °C
      * @param standard             conductor tables: nec (AWG, NFPA 70) or iec (mm², IEC 60228 / 60364-5-52)
@@ -225,7 +230,7 @@ public record ProjectInput(
      */
     public record WiringInput(Double batteryToInverterM, Double batteryToControllerM, Double pvToControllerM,
                               Double maxVoltageDropPct, Double conductorAmbientC, ConductorStandard standard,
-                              Boolean fineStranded) {
+                              Boolean fineStranded, Double busBarToInverterM) {
     }
 
     /** Which conductor tables to use. */

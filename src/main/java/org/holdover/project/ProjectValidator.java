@@ -134,11 +134,17 @@ public final class ProjectValidator {
             if (p.rules().maxParallelStrings() != null && (p.rules().maxParallelStrings() < 1 || p.rules().maxParallelStrings() > 64)) {
                 error("rules.maxParallelStrings", "must be 1–64, got " + p.rules().maxParallelStrings(), "");
             }
+            Integer inv = p.rules().maxInvertersInParallel();
+            if (inv != null && (inv < 1 || inv > org.holdover.catalog.CatalogReader.MAX_INVERTERS_IN_PARALLEL)) {
+                error("rules.maxInvertersInParallel", "must be 1–" + org.holdover.catalog.CatalogReader.MAX_INVERTERS_IN_PARALLEL
+                        + ", got " + inv, "1 keeps every system to a single inverter");
+            }
         }
         if (p.wiring() != null) {
             rangeOpenLow("wiring.batteryToInverterM", p.wiring().batteryToInverterM(), 0, 100, "m");
             rangeOpenLow("wiring.batteryToControllerM", p.wiring().batteryToControllerM(), 0, 100, "m");
             rangeOpenLow("wiring.pvToControllerM", p.wiring().pvToControllerM(), 0, 500, "m");
+            rangeOpenLow("wiring.busBarToInverterM", p.wiring().busBarToInverterM(), 0, 100, "m");
             rangeOpenLow("wiring.maxVoltageDropPct", p.wiring().maxVoltageDropPct(), 0, 10, "%");
             range("wiring.conductorAmbientC", p.wiring().conductorAmbientC(), -40, 70, "°C");
         }

@@ -29,18 +29,21 @@ final class AlternativesSheet {
     private AlternativesSheet() {
     }
 
-    private static final String[] HEAD = {"System", "Bus V", "Inverter", "Inverter price", "Battery module", "Battery modules",
+    private static final String[] HEAD = {"System", "Bus V", "Inverter", "Inverters in parallel", "Inverter price",
+        "Battery module", "Battery modules",
         "Module price", "Strings", "Bank kWh", "PV module", "PV modules", "PV module price", "Modules per string",
         "Strings per controller", "Controllers", "Controller", "Controller price", "Array kW", "Demo cost",
         "Unmet Wh (simulated year)", "Hours unmet", "Lowest state of charge", "Smallest check margin", "Note"};
-    static final int COST = 18;
+    static final int INV_N = 3, INV_PRICE = 4, MODULES = 6, MODULE_PRICE = 7, PV_MODULES = 11, PV_PRICE = 12,
+            CONTROLLERS = 15, CONTROLLER_PRICE = 17, COST = 19, UNMET = 20, LIFE = 25, LIFETIME = 26;
 
     static void write(Context ctx) {
         SheetWriter s = ctx.sheet(Context.ALTERNATIVES);
         SearchResult sr = ctx.r.search();
         int r = 0;
         s.text(r++, 0, "Alternatives: the system search", ctx.styles.title);
-        r = s.paragraph(r, 0, 12, "Every combination the catalog allows (bus × inverter × battery module × strings × PV module ×"
+        r = s.paragraph(r, 0, 12, "Every combination the catalog allows (bus × inverter × inverters in parallel × battery module"
+                + " × strings × PV module ×"
                 + " controller × modules per string × strings × controllers) is checked part by part; the systems whose parts"
                 + " all pass are simulated over the year in order of demo cost, and the first that leaves no more unmet energy"
                 + " than the project accepts is chosen. Demo prices are invented: with your own catalog's prices the order"
@@ -88,7 +91,7 @@ final class AlternativesSheet {
         rows.addAll(sr.alternatives());
         wrappedHeader(ctx, s, r, 0, HEAD);
         if (sr.objective().lifetime()) {
-            wrappedHeader(ctx, s, r, 24, "Battery life, years", "Lifetime cost");
+            wrappedHeader(ctx, s, r, LIFE, "Battery life, years", "Lifetime cost");
         }
         if (sr.generatorsSearched()) {
             wrappedHeader(ctx, s, r, GEN_ID, "Generator", "Generator price");
@@ -147,7 +150,7 @@ final class AlternativesSheet {
         for (int c = 1; c <= FUEL; c++) {
             s.sheet.setColumnWidth(c, 9 * 256);
         }
-        for (int c : new int[] {2, 4, 9, 15}) {
+        for (int c : new int[] {2, 5, 10, 16}) {
             s.sheet.setColumnWidth(c, 17 * 256);
         }
         s.sheet.setColumnWidth(HEAD.length - 1, 44 * 256);
@@ -172,9 +175,9 @@ final class AlternativesSheet {
     }
 
     /** Columns of the generator and its price (only when the search may add a generator). */
-    static final int GEN_ID = 26;
+    static final int GEN_ID = 27;
     /** Column of the generator's fuel cost a year (lifetime objective with generators). */
-    static final int FUEL = 28;
+    static final int FUEL = 29;
 
     private static void row(SheetWriter s, int r, String label, SearchResult.Evaluated e, SearchResult sr) {
         SearchResult.Candidate c = e.candidate();
@@ -183,44 +186,48 @@ final class AlternativesSheet {
         s.text(r, 0, label);
         s.input(r, 1, p.busClassV(), Styles.INT);
         s.inputText(r, 2, p.inverterId());
-        s.input(r, 3, c.inverterPrice(), Styles.INT);
-        s.inputText(r, 4, p.batteryModuleId());
-        s.input(r, 5, c.bankModules(), Styles.INT);
-        s.input(r, 6, c.bankModulePrice(), Styles.INT);
-        s.input(r, 7, p.strings(), Styles.INT);
-        s.input(r, 8, c.bankKwh(), Styles.D1);
+        s.input(r, INV_N, p.inverters(), Styles.INT);
+        s.input(r, INV_PRICE, c.inverterPrice(), Styles.INT);
+        s.inputText(r, 5, p.batteryModuleId());
+        s.input(r, MODULES, c.bankModules(), Styles.INT);
+        s.input(r, MODULE_PRICE, c.bankModulePrice(), Styles.INT);
+        s.input(r, 8, p.strings(), Styles.INT);
+        s.input(r, 9, c.bankKwh(), Styles.D1);
         SystemPin.PvPin pv = p.pv();
-        s.inputText(r, 9, pv == null ? "none" : pv.moduleId());
-        s.input(r, 10, c.pvModules(), Styles.INT);
-        s.input(r, 11, c.pvModulePrice(), Styles.INT);
-        s.input(r, 12, pv == null ? 0 : pv.modulesPerString(), Styles.INT);
-        s.input(r, 13, pv == null ? 0 : pv.stringsPerController(), Styles.INT);
-        s.input(r, 14, c.controllers(), Styles.INT);
-        s.inputText(r, 15, pv == null ? "none" : pv.controllerId());
-        s.input(r, 16, c.controllerPrice(), Styles.INT);
-        s.input(r, 17, c.pvKw(), Styles.D2);
+        s.inputText(r, 10, pv == null ? "none" : pv.moduleId());
+        s.input(r, PV_MODULES, c.pvModules(), Styles.INT);
+        s.input(r, PV_PRICE, c.pvModulePrice(), Styles.INT);
+        s.input(r, 13, pv == null ? 0 : pv.modulesPerString(), Styles.INT);
+        s.input(r, 14, pv == null ? 0 : pv.stringsPerController(), Styles.INT);
+        s.input(r, CONTROLLERS, c.controllers(), Styles.INT);
+        s.inputText(r, 16, pv == null ? "none" : pv.controllerId());
+        s.input(r, CONTROLLER_PRICE, c.controllerPrice(), Styles.INT);
+        s.input(r, 18, c.pvKw(), Styles.D2);
         boolean gen = sr.generatorsSearched();
         if (gen) {
             s.inputText(r, GEN_ID, p.generatorId() == null ? "none" : p.generatorId());
             s.input(r, GEN_ID + 1, c.generatorPrice(), Styles.INT);
         }
-        s.formula(r, COST, "D" + R + "+F" + R + "*G" + R + "+K" + R + "*L" + R + "+O" + R + "*Q" + R
-                + (gen ? "+" + SheetWriter.col(GEN_ID + 1) + R : ""), c.cost(), Styles.INT);
+        java.util.function.IntFunction<String> at = c0 -> SheetWriter.col(c0) + R;
+        s.formula(r, COST, at.apply(INV_N) + "*" + at.apply(INV_PRICE) + "+" + at.apply(MODULES) + "*" + at.apply(MODULE_PRICE)
+                + "+" + at.apply(PV_MODULES) + "*" + at.apply(PV_PRICE) + "+" + at.apply(CONTROLLERS) + "*" + at.apply(CONTROLLER_PRICE)
+                + (gen ? "+" + at.apply(GEN_ID + 1) : ""), c.cost(), Styles.INT);
         if (Double.isNaN(e.unmetWh())) {
-            s.text(r, 19, sr.simulated() ? "not simulated" : "not simulated (off grid without PV)");
+            s.text(r, UNMET, sr.simulated() ? "not simulated" : "not simulated (off grid without PV)");
         } else {
-            s.input(r, 19, e.unmetWh(), Styles.INT);
-            s.input(r, 20, e.unmetHours(), Styles.INT);
-            s.input(r, 21, e.lowestSoc(), Styles.PCT);
+            s.input(r, UNMET, e.unmetWh(), Styles.INT);
+            s.input(r, UNMET + 1, e.unmetHours(), Styles.INT);
+            s.input(r, UNMET + 2, e.lowestSoc(), Styles.PCT);
         }
         if (Double.isFinite(c.lowestMargin())) {
-            s.input(r, 22, c.lowestMargin(), Styles.PCT);
+            s.input(r, UNMET + 3, c.lowestMargin(), Styles.PCT);
         }
-        s.text(r, 23, e.designNote());
+        s.text(r, UNMET + 4, e.designNote());
         if (sr.objective().lifetime() && Double.isFinite(e.lifeYears())) {
-            s.input(r, 24, e.lifeYears(), Styles.D1);
-            String n = "MAX(0,-INT(-(CostHorizonY/Y" + R + "-1E-9))-1)";
-            String q = "(1+DiscountRate)^(-Y" + R + ")";
+            s.input(r, LIFE, e.lifeYears(), Styles.D1);
+            String life = at.apply(LIFE);
+            String n = "MAX(0,-INT(-(CostHorizonY/" + life + "-1E-9))-1)";
+            String q = "(1+DiscountRate)^(-" + life + ")";
             String fuel = "";
             if (gen) {
                 // The year's fuel cost (engine: simulated fuel × price) × the annuity factor over the horizon.
@@ -228,7 +235,7 @@ final class AlternativesSheet {
                 fuel = "+" + SheetWriter.col(FUEL) + R
                         + "*IF(DiscountRate=0,CostHorizonY,(1-(1+DiscountRate)^(-CostHorizonY))/DiscountRate)";
             }
-            s.formula(r, 25, "S" + R + "+F" + R + "*G" + R + "*IF(" + n + "=0,0,IF(DiscountRate=0," + n + "," + q + "*(1-" + q + "^" + n
+            s.formula(r, LIFETIME, at.apply(COST) + "+" + at.apply(MODULES) + "*" + at.apply(MODULE_PRICE) + "*IF(" + n + "=0,0,IF(DiscountRate=0," + n + "," + q + "*(1-" + q + "^" + n
                     + ")/(1-" + q + ")))" + fuel, e.objective(), Styles.INT);
         }
     }
@@ -253,7 +260,7 @@ final class AlternativesSheet {
             ys[i] = front.get(i).unmetWh();
         }
         XDDFNumericalDataSource<Double> xsrc = XDDFDataSourcesFactory.fromArray(xs, s.ref(firstRow, COST, lastRow, COST), COST);
-        XDDFNumericalDataSource<Double> ysrc = XDDFDataSourcesFactory.fromArray(ys, s.ref(firstRow, 19, lastRow, 19), 19);
+        XDDFNumericalDataSource<Double> ysrc = XDDFDataSourcesFactory.fromArray(ys, s.ref(firstRow, UNMET, lastRow, UNMET), UNMET);
         XDDFScatterChartData data = (XDDFScatterChartData) chart.createData(ChartTypes.SCATTER, x, y);
         data.setStyle(ScatterStyle.LINE_MARKER);
         XDDFScatterChartData.Series series = (XDDFScatterChartData.Series) data.addSeries(xsrc, ysrc);

@@ -25,7 +25,9 @@ final class BusSheet {
             s.input(r, 0, b.busClassV(), Styles.INT);
             if (b.inverter() != null) {
                 int row = InvertersSheet.FIRST + all.indexOf(b.inverter());
-                s.formulaName(r, 1, inv.ref(row, InvertersSheet.ID), b.inverter().spec().id());
+                String units = inv.ref(row, InvertersSheet.UNITS);
+                s.formulaName(r, 1, "IF(" + units + ">1," + units + "&\" × \"&" + inv.ref(row, InvertersSheet.ID) + ","
+                        + inv.ref(row, InvertersSheet.ID) + ")", b.inverter().spec().label());
                 s.formula(r, 2, inv.ref(row, InvertersSheet.DC_A), b.currentCheck().value(), Styles.D1);
                 s.formula(r, 3, "MaxBatteryA", b.currentCheck().limit(), Styles.INT);
                 s.formulaText(r, 4, "IF(C" + R + "<=D" + R + ",\"pass\",\"FAIL\")", b.currentCheck().passes() ? "pass" : "FAIL");

@@ -36,7 +36,7 @@ final class CurvesSheet {
         for (int i = 0; i < all.size(); i++) {
             InverterSpec spec = all.get(i);
             LossModel loss = spec.loss();
-            int invRow = InvertersSheet.FIRST + i;
+            int invRow = InvertersSheet.rowOf(ctx, spec);
             s.text(r++, 0, spec.id() + " - " + spec.description(), ctx.styles.subtitle);
             s.text(r, 0, "Rated continuous output, W");
             s.formula(r, VALUE_COL, inv.ref(invRow, InvertersSheet.CONT_W), spec.continuousW(), Styles.INT);
@@ -120,8 +120,15 @@ final class CurvesSheet {
                 r++;
             }
             blocks.add(new Block(p0Row, k1Row, k2Row, weighted[0], weighted[1]));
-            if (ctx.r.inverter() != null && ctx.r.inverter().spec() == spec) {
-                s.name("InvRatedW", ratedRow, VALUE_COL);
+            if (ctx.r.inverter() != null && ctx.r.inverter().spec().catalogUnit() == spec) {
+                int chosenRow = InvertersSheet.FIRST + ctx.r.inverters().indexOf(ctx.r.inverter());
+                s.text(r, 0, "Units in parallel (the chosen system)");
+                s.formula(r, VALUE_COL, inv.ref(chosenRow, InvertersSheet.UNITS), ctx.r.inverter().spec().units(), Styles.INT);
+                int unitsRow = r++;
+                s.text(r, 0, "Rating of the units together, W (loss model: same p0, k1, k2)");
+                s.formula(r, VALUE_COL, SheetWriter.rel(ratedRow, VALUE_COL) + "*" + SheetWriter.rel(unitsRow, VALUE_COL),
+                        ctx.r.inverter().spec().loss().ratedW(), Styles.INT);
+                s.name("InvRatedW", r++, VALUE_COL);
                 s.name("InvP0", p0Row, VALUE_COL);
                 s.name("InvK1", k1Row, VALUE_COL);
                 s.name("InvK2", k2Row, VALUE_COL);

@@ -18,7 +18,7 @@ final class InvertersSheet {
             AC_OK = 22, DERATE = 23, AVAIL_W = 24, REQ_W = 25, OK_W = 26, AVAIL_VA = 27, REQ_VA = 28, OK_VA = 29,
             AVAIL_SURGE = 30, REQ_SURGE = 31, OK_SURGE = 32, AVAIL_LEG = 33, REQ_LEG = 34, OK_LEG = 35,
             AVAIL_LEG_SURGE = 36, REQ_LEG_SURGE = 37, OK_LEG_SURGE = 38, P0 = 39, K1 = 40, K2 = 41, DC_A = 42,
-            DC_SURGE_A = 43, PASS = 44, CEC = 45, EURO = 46;
+            DC_SURGE_A = 43, PASS = 44, CEC = 45, EURO = 46, UNITS = 47, UNITS_PRICE = 48;
 
     private InvertersSheet() {
     }
@@ -26,8 +26,10 @@ final class InvertersSheet {
     static void write(Context ctx, List<CurvesSheet.Block> blocks) {
         SheetWriter s = ctx.sheet(Context.INVERTERS);
         SheetWriter curves = ctx.sheet(Context.CURVES);
-        s.text(0, 0, "Inverters: every catalog unit against the demand", ctx.styles.title);
-        s.text(1, 0, "Continuous ratings are derated above the unit's derating start: factor = 1 − max(0, ambient − start) × %/°C ÷ 100."
+        s.text(0, 0, "Inverters: every catalog unit, alone and in parallel, against the demand", ctx.styles.title);
+        s.text(1, 0, "Ratings are one unit's (catalog); identical units in parallel (last columns) share the load equally, so every"
+                + " rating, the no-load draw and the price are × units and the loss model is the unit's with × units the rating."
+                + " Continuous ratings are derated above the unit's derating start: factor = 1 − max(0, ambient − start) × %/°C ÷ 100."
                 + " Surge available = the rating of the shortest listed duration at least as long as the start (slots in rising duration; 0 = unused)."
                 + " DC current at the low-voltage cutoff = (P + rated × (p0 + k1·p + k2·p²)) ÷ V_cutoff.", ctx.styles.note);
         s.text(2, 0, ctx.r.input().catalog().demoData() ? "Catalog: " + ctx.r.input().catalog().name()
@@ -39,16 +41,18 @@ final class InvertersSheet {
                 "AC output matches", "Derating factor", "Available W", "Needed W", "W check", "Available VA", "Needed VA",
                 "VA check", "Surge available VA", "Surge needed VA", "Surge check", "Leg available VA", "Leg needed VA",
                 "Leg check", "Leg surge available VA", "Leg surge needed VA", "Leg surge check", "p0", "k1", "k2",
-                "DC current, running, A", "DC current, surge, A", "Passes", "CEC weighted η", "European weighted η");
+                "DC current, running, A", "DC current, surge, A", "Passes", "CEC weighted η", "European weighted η",
+                "Units in parallel", "Price of the units");
         List<InverterAssessment> all = ctx.r.inverters();
         boolean motors = ctx.hasMotors();
         for (int i = 0; i < all.size(); i++) {
             InverterAssessment a = all.get(i);
-            InverterSpec spec = a.spec();
+            InverterSpec spec = a.spec().catalogUnit();
+            int units = a.spec().units();
             int r = FIRST + i;
             String R = String.valueOf(r + 1);
             s.inputText(r, ID, spec.id());
-            s.inputText(r, DESC, spec.description());
+            s.inputText(r, DESC, units == 1 ? spec.description() : units + " in parallel: " + spec.description());
             s.input(r, BUS, spec.busClassV(), Styles.INT);
             s.input(r, DC_MIN, spec.dcMinV(), Styles.D1);
             s.input(r, DC_MAX, spec.dcMaxV(), Styles.D1);
@@ -73,13 +77,16 @@ final class InvertersSheet {
             s.formula(r, DERATE, "MAX(0,1-MAX(0,InverterAmbientC-M" + R + ")*N" + R + "/100)", a.deratingFactor(), Styles.D3);
             Check w = find(a, "inverter.continuousW");
             Check va = find(a, "inverter.continuousVa");
-            s.formula(r, AVAIL_W, "X" + R + "*J" + R, w.value(), Styles.INT);
+            s.input(r, UNITS, units, Styles.INT);
+            s.formula(r, UNITS_PRICE, "V" + R + "*AV" + R, a.spec().price(), Styles.INT);
+            s.formula(r, AVAIL_W, "X" + R + "*J" + R + "*AV" + R, w.value(), Styles.INT);
             s.formula(r, REQ_W, "Margin*RunPeakW", w.limit(), Styles.INT);
             verdict(s, r, OK_W, "Y" + R + ">=Z" + R, w);
-            s.formula(r, AVAIL_VA, "X" + R + "*K" + R, va.value(), Styles.INT);
+            s.formula(r, AVAIL_VA, "X" + R + "*K" + R + "*AV" + R, va.value(), Styles.INT);
             s.formula(r, REQ_VA, "Margin*RunPeakVA", va.limit(), Styles.INT);
             verdict(s, r, OK_VA, "AB" + R + ">=AC" + R, va);
-            String surgeAvail = "IF(SurgeS<=O" + R + ",P" + R + ",IF(SurgeS<=Q" + R + ",R" + R + ",IF(SurgeS<=S" + R + ",T" + R + ",K" + R + ")))";
+            String surgeAvail = "IF(SurgeS<=O" + R + ",P" + R + ",IF(SurgeS<=Q" + R + ",R" + R + ",IF(SurgeS<=S" + R + ",T" + R + ",K" + R
+                    + ")))*AV" + R;
             if (motors) {
                 Check su = find(a, "inverter.surgeVa");
                 s.formula(r, AVAIL_SURGE, surgeAvail, su.value(), Styles.INT);
@@ -90,7 +97,7 @@ final class InvertersSheet {
             }
             if (ctx.split() && spec.ac().splitPhase()) {
                 Check leg = find(a, "inverter.legVa");
-                s.formula(r, AVAIL_LEG, "X" + R + "*L" + R, leg.value(), Styles.INT);
+                s.formula(r, AVAIL_LEG, "X" + R + "*L" + R + "*AV" + R, leg.value(), Styles.INT);
                 s.formula(r, REQ_LEG, "Margin*LegPeakVA", leg.limit(), Styles.INT);
                 verdict(s, r, OK_LEG, "AH" + R + ">=AI" + R, leg);
                 if (motors) {
@@ -105,12 +112,13 @@ final class InvertersSheet {
                 s.text(r, OK_LEG, "n/a");
                 s.text(r, OK_LEG_SURGE, "n/a");
             }
-            CurvesSheet.Block b = blocks.get(i);
+            CurvesSheet.Block b = blocks.get(ctx.r.input().catalog().inverters().indexOf(spec));
             LossModel loss = spec.loss();
             s.formula(r, P0, curves.ref(b.p0Row(), CurvesSheet.VALUE_COL), loss.p0(), Styles.D4);
             s.formula(r, K1, curves.ref(b.k1Row(), CurvesSheet.VALUE_COL), loss.k1(), "0.00000");
             s.formula(r, K2, curves.ref(b.k2Row(), CurvesSheet.VALUE_COL), loss.k2(), "0.00000");
             s.formula(r, DC_A, dcCurrent("RunPeakW", R), a.continuousDcA(), Styles.D1);
+            // (the DC current formula takes the rating of the units together: J × AV)
             s.formula(r, DC_SURGE_A, dcCurrent(motors ? "SurgeW" : "RunPeakW", R), a.surgeDcA(), Styles.D1);
             s.formulaText(r, PASS, "IF(AND(W" + R + "=\"yes\",AA" + R + "=\"pass\",AD" + R + "=\"pass\",AG" + R + "<>\"FAIL\",AJ" + R
                     + "<>\"FAIL\",AM" + R + "<>\"FAIL\"),\"pass\",\"FAIL\")", a.passes() ? "pass" : "FAIL");
@@ -118,6 +126,8 @@ final class InvertersSheet {
             s.formula(r, EURO, curves.ref(b.euroRow(), 3), WeightedEfficiency.EURO.of(loss), Styles.PCT);
             if (ctx.r.inverter() != null && ctx.r.inverter() == a) {
                 s.name("ChosenInvRow", r, ID);
+                s.name("InvUnits", r, UNITS);
+                s.name("InvUnitsPrice", r, UNITS_PRICE);
                 s.name("ContA", r, DC_A);
                 s.name("SurgeA", r, DC_SURGE_A);
                 s.name("InvDcMaxV", r, DC_MAX);
@@ -127,14 +137,26 @@ final class InvertersSheet {
         s.sheet.createFreezePane(1, FIRST);
         s.sheet.setColumnWidth(ID, 22 * 256);
         s.sheet.setColumnWidth(DESC, 40 * 256);
-        for (int k = BUS; k <= EURO; k++) {
+        for (int k = BUS; k <= UNITS_PRICE; k++) {
             s.sheet.setColumnWidth(k, 11 * 256);
         }
     }
 
+    /** Row of a catalog unit (alone) on this sheet. */
+    static int rowOf(Context ctx, InverterSpec unit) {
+        List<InverterAssessment> all = ctx.r.inverters();
+        for (int i = 0; i < all.size(); i++) {
+            if (all.get(i).spec() == unit) {
+                return FIRST + i;
+            }
+        }
+        throw new IllegalStateException("no row for " + unit.id());
+    }
+
     private static String dcCurrent(String power, String R) {
-        String p = "(" + power + "/J" + R + ")";
-        return "(" + power + "+J" + R + "*(AN" + R + "+AO" + R + "*" + p + "+AP" + R + "*" + p + "*" + p + "))/D" + R;
+        String rated = "J" + R + "*AV" + R;
+        String p = "(" + power + "/(" + rated + "))";
+        return "(" + power + "+" + rated + "*(AN" + R + "+AO" + R + "*" + p + "+AP" + R + "*" + p + "*" + p + "))/D" + R;
     }
 
     static void verdict(SheetWriter s, int r, int c, String condition, Check check) {

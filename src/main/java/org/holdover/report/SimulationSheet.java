@@ -48,7 +48,7 @@ final class SimulationSheet {
                 Styles.INT);
         r = p(s, r, "S_EtaChg", gen ? "Charger efficiency" : "Grid charger efficiency", "common practice, no source",
                 y.charger().efficiency(), "", Styles.PCT);
-        s.text(r, 0, "Inverter: rated W, p0, k1, k2 (Inverter curves sheet)");
+        s.text(r, 0, "Inverter: rated W (all units in parallel), p0, k1, k2 (Inverter curves sheet)");
         s.formula(r, 2, "InvRatedW", y.inverter().ratedW(), Styles.INT);
         s.formula(r, 3, "InvP0", y.inverter().noLoadLossPu(), Styles.D4);
         s.formula(r, 4, "InvK1", y.inverter().linearLossPu(), "0.00000");

@@ -137,6 +137,8 @@ final class SummarySheet {
         s.text(row, 0, "Inverter");
         s.formulaName(row, 1, "ChosenInvRow", r.inverter().spec().id());
         side(ctx, s, row++, r.inverter().spec().description());
+        s.text(row, 0, "Inverters in parallel (identical units sharing one output)");
+        s.formula(row++, 1, "InvUnits", r.inverter().spec().units(), Styles.INT);
         s.text(row, 0, "Battery module");
         s.formulaName(row, 1, bat.ref(bankRow, BatterySheet.ID), b.module().id());
         side(ctx, s, row++, b.module().description());
@@ -146,9 +148,8 @@ final class SummarySheet {
         s.text(row, 0, "Bank nominal V; rated kWh");
         s.formula(row, 1, bat.ref(bankRow, BatterySheet.BANK_V), b.bankNominalV(), Styles.D1);
         s.formula(row++, 2, bat.ref(bankRow, BatterySheet.KWH), b.bankEnergyWh() / 1000.0, Styles.D2);
-        s.text(row, 0, "Demo price: inverter + bank");
-        int invRow = InvertersSheet.FIRST + r.inverters().indexOf(r.inverter());
-        s.formula(row++, 1, ctx.sheet(Context.INVERTERS).ref(invRow, InvertersSheet.PRICE) + "+" + bat.ref(bankRow, BatterySheet.COST),
+        s.text(row, 0, "Demo price: inverter(s) + bank");
+        s.formula(row++, 1, "InvUnitsPrice+" + bat.ref(bankRow, BatterySheet.COST),
                 r.inverter().spec().price() + b.price(), Styles.INT);
         if (r.generator() != null) {
             s.text(row, 0, "Engine generator");

@@ -52,8 +52,9 @@ final class WiringSheet {
         int r = 2;
         s.text(r++, 0, "Battery to inverter: conductor and overcurrent device (" + (nec ? "NFPA 70 (NEC) 2023" : "IEC 60364-5-52 / IEC 60228") + ")", ctx.styles.subtitle);
         s.header(r++, 0, "Quantity", "Value", "Unit", "How");
-        String x = invs.ref(invRow, InvertersSheet.CONT_W);
-        r = f(s, r, "Inverter rated continuous output", x, inv.continuousW(), "W", "catalog", Styles.INT, "W_RatedW");
+        String x = invs.ref(invRow, InvertersSheet.CONT_W) + "*" + invs.ref(invRow, InvertersSheet.UNITS);
+        r = f(s, r, inv.units() > 1 ? "Inverters' rated continuous output (" + inv.units() + " in parallel)"
+                : "Inverter rated continuous output", x, inv.continuousW(), "W", "catalog × units in parallel", Styles.INT, "W_RatedW");
         double dcIn = inv.loss().inputW(inv.continuousW());
         r = f(s, r, "Its DC input at rated output (loss model)", "W_RatedW+W_RatedW*(InvP0+InvK1*1+InvK2*1*1)", dcIn, "W",
                 "rated × (1 + p0 + k1 + k2)", Styles.INT, "W_DcInW");
@@ -206,6 +207,27 @@ final class WiringSheet {
                 ctx.checkCells.put(k[0] + ".drop", new String[] {k[1] + "DropPct", k[1] + "DropLimitPct"});
                 ctx.checkCells.put(k[0] + ".fuse", new String[] {k[1] + "DeviceA", k[1] + "DesignA"});
             }
+        }
+
+        org.holdover.sizing.InverterLeads leads = ctx.r.inverterLeads();
+        if (leads != null && leads.lead() instanceof ConductorSelection.Sized unitLead) {
+            InverterSpec unit = inv.catalogUnit();
+            r++;
+            s.text(r++, 0, "Each inverter's DC leads from the common bus bar (" + leads.units() + " inverters in parallel)", ctx.styles.subtitle);
+            s.header(r++, 0, "Quantity", "Value", "Unit", "How");
+            r = f(s, r, "Inverters in parallel", "InvUnits", leads.units(), "", "Inverters sheet; the battery cable above carries them all",
+                    Styles.INT, null);
+            r = f(s, r, "One unit's rated continuous output", invs.ref(invRow, InvertersSheet.CONT_W), unit.continuousW(), "W", "catalog",
+                    Styles.INT, "IVL_UnitW");
+            r = f(s, r, "Its DC input at rated output (loss model)", "IVL_UnitW+IVL_UnitW*(InvP0+InvK1*1+InvK2*1*1)",
+                    unit.loss().inputW(unit.continuousW()), "W", "rated × (1 + p0 + k1 + k2)", Styles.INT, "IVL_DcInW");
+            r = f(s, r, "Continuous current of each lead", "IVL_DcInW/InvDcMinV", leads.unitContinuousA(), "A",
+                    "one unit's rated input at its cutoff", Styles.D1, "IVL_ContA");
+            r = conductor(ctx, s, r, "IVL_", unitLead, "Nominal bank voltage (drop is a % of it)", bat.ref(bankRow, BatterySheet.BANK_V),
+                    unitLead.request().nominalV(), "Battery sheet");
+            ctx.checkCells.put("lead.ampacity", new String[] {"IVL_AllowableA", "MAX(IVL_DesignA,IVL_CouA)"});
+            ctx.checkCells.put("lead.drop", new String[] {"IVL_DropPct", "IVL_DropLimitPct"});
+            ctx.checkCells.put("lead.fuse", new String[] {"IVL_DeviceA", "IVL_DesignA"});
         }
 
         r++;

@@ -142,6 +142,11 @@ public final class ProjectAssembler {
                 rules != null && rules.maxBatteryCurrentA() != null ? "project" : "default",
                 PRACTICE + "; 150 A × 1.25 = 187.5 A fits one 3/0 AWG copper conductor (NEC 2023 Table 310.16, 75 °C: 200 A)"));
         int maxParallel = rules != null && rules.maxParallelStrings() != null ? rules.maxParallelStrings() : 0;
+        int maxInverters = rules != null && rules.maxInvertersInParallel() != null ? rules.maxInvertersInParallel()
+                : SizingInput.DEFAULT_MAX_INVERTERS_IN_PARALLEL;
+        assumptions.add(new Assumption("Most identical inverters in parallel", maxInverters, "",
+                rules != null && rules.maxInvertersInParallel() != null ? "project" : "default",
+                "bounds the search; each unit's own catalog limit applies too (1 when its maker does not allow parallel units)"));
 
         double invAmbient = site.inverterAmbientC() != null ? site.inverterAmbientC() : DEFAULT_TEMP_C;
         assumptions.add(new Assumption("Ambient around the inverter", invAmbient, "°C", given(site.inverterAmbientC()),
@@ -185,7 +190,7 @@ public final class ProjectAssembler {
         return new SizingInput(p.name(), p.mode(), volts, site.ac().frequencyHz(), split, invAmbient, cold, margin, maxA,
                 maxParallel, chem, dod, eol, b == null ? null : b.location(), outage, days, loads, catalog, assumptions,
                 warnings, p.notes() == null ? List.of() : p.notes(), measured == null ? null : measured.hourlyW(), scale,
-                served, wiring, unmet(p, assumptions), designTemp(site, cold), solar, generator(p, assumptions));
+                served, wiring, unmet(p, assumptions), designTemp(site, cold), solar, generator(p, assumptions), maxInverters);
     }
 
     /** The generator rules: none without a {@code generator:} section; otherwise its values or the defaults. */
@@ -278,10 +283,14 @@ public final class ProjectAssembler {
             assumptions.add(new Assumption("PV output circuit, one way", pvRun == null ? PvCircuits.DEFAULT_PV_RUN_M : pvRun, "m",
                     pvRun == null ? "default" : "project", pvRun == null ? PRACTICE : "project"));
         }
+        Double lead = w == null ? null : w.busBarToInverterM();
+        assumptions.add(new Assumption("Each inverter's leads from the common DC bus bar, one way (inverters in parallel)",
+                lead == null ? InverterLeads.DEFAULT_LEAD_M : lead, "m", lead == null ? "default" : "project",
+                lead == null ? PRACTICE : "project"));
         return new WiringRules(length, ctl == null ? PvCircuits.DEFAULT_CONTROLLER_RUN_M : ctl,
                 pvRun == null ? PvCircuits.DEFAULT_PV_RUN_M : pvRun, dropPct, ambient,
                 std == ProjectInput.ConductorStandard.NEC ? org.holdover.dc.TableSystem.NEC : org.holdover.dc.TableSystem.IEC,
-                fine, bus);
+                fine, bus, lead == null ? InverterLeads.DEFAULT_LEAD_M : lead);
     }
 
     private static String given(Object o) {

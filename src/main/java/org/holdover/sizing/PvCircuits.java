@@ -54,7 +54,7 @@ public record PvCircuits(ConductorSelection pvOutput, ConductorSelection control
         return out;
     }
 
-    private static void add(List<Check> out, String id, String name, ConductorSelection sel) {
+    static void add(List<Check> out, String id, String name, ConductorSelection sel) {
         if (!(sel instanceof ConductorSelection.Sized s)) {
             out.add(new Check(id + ".none", name + ": " + ((ConductorSelection.NotSized) sel).reason(), 0, 1, "",
                     Check.Sense.AT_LEAST, "no conductor in the tables fits"));

@@ -40,7 +40,7 @@ public record SearchResult(Evaluated chosen, List<Evaluated> alternatives, List<
      *
      * @param pin        the components
      * @param family     the family it belongs to (bus, inverter, battery module, PV module and controller), in words
-     * @param inverterPrice demo price of the inverter
+     * @param inverterPrice demo price of one inverter (the pin says how many run in parallel)
      * @param bankModules battery modules in the bank
      * @param bankModulePrice demo price of one battery module
      * @param pvModules  PV modules (0 without PV)
@@ -56,16 +56,16 @@ public record SearchResult(Evaluated chosen, List<Evaluated> alternatives, List<
                             int pvModules, double pvModulePrice, int controllers, double controllerPrice, double bankKwh,
                             double pvKw, double lowestMargin, double generatorPrice) {
 
-        /** Demo capital cost: inverter + battery modules + PV modules + controllers + generator. */
+        /** Demo capital cost: inverters + battery modules + PV modules + controllers + generator. */
         public double cost() {
-            return inverterPrice + bankModules * bankModulePrice + pvModules * pvModulePrice + controllers * controllerPrice
+            return pin.inverters() * inverterPrice + bankModules * bankModulePrice + pvModules * pvModulePrice + controllers * controllerPrice
                     + generatorPrice;
         }
 
         /** The components in a few words. */
         public String describe() {
             String s = String.format(java.util.Locale.ROOT, "%s V bus, %s, %d × %s (%d strings, %.1f kWh)", fmt(pin.busClassV()),
-                    pin.inverterId(), bankModules, pin.batteryModuleId(), pin.strings(), bankKwh);
+                    (pin.inverters() > 1 ? pin.inverters() + " × " : "") + pin.inverterId(), bankModules, pin.batteryModuleId(), pin.strings(), bankKwh);
             if (pin.pv() != null) {
                 SystemPin.PvPin p = pin.pv();
                 s += String.format(java.util.Locale.ROOT, ", %d × %s (%d per string, %d strings on each of %d × %s; %.1f kW)", pvModules,

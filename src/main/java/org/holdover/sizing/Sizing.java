@@ -50,10 +50,7 @@ public final class Sizing {
      */
     public static SizingResult rules(SizingInput in, SystemPin pin) {
         LoadAnalysis.Figures f = in.loads().figures();
-        List<InverterAssessment> assessments = new ArrayList<>();
-        for (InverterSpec s : in.catalog().inverters()) {
-            assessments.add(assess(s, in));
-        }
+        List<InverterAssessment> assessments = assessAll(in);
         TreeSet<Double> classes = new TreeSet<>();
         in.catalog().inverters().forEach(s -> classes.add(s.busClassV()));
         if (in.wiring().busVoltageV() > 0) {
@@ -123,6 +120,10 @@ public final class Sizing {
         if (pvCircuits != null) {
             checks.addAll(pvCircuits.checks());
         }
+        InverterLeads leads = InverterLeads.size(in, inv.spec(), bank.bankNominalV());
+        if (leads != null) {
+            checks.addAll(leads.checks());
+        }
         LossModel loss = inv.spec().loss();
         double[] batteryTemp = new double[in.loads().calendar().hours()];
         java.util.Arrays.fill(batteryTemp, in.batteryDesignC());
@@ -149,7 +150,21 @@ public final class Sizing {
                     year.unmetLimitWh(), "Wh", Check.Sense.AT_MOST, "project reliability target; hour-by-hour energy balance"));
         }
         return new SizingResult(in, assessments, buses, chosen, chosenEnergy, bank.requirement(), checks, advisories,
-                WeightedEfficiency.CEC.of(loss), WeightedEfficiency.EURO.of(loss), year, solar, pvCircuits, null, generator);
+                WeightedEfficiency.CEC.of(loss), WeightedEfficiency.EURO.of(loss), year, solar, pvCircuits, null, generator, leads);
+    }
+
+    /**
+     * Every catalog inverter against the demand, each followed by its units in parallel (2 up to the smaller of its catalog
+     * limit and the project's), in catalog order.
+     */
+    public static List<InverterAssessment> assessAll(SizingInput in) {
+        List<InverterAssessment> out = new ArrayList<>();
+        for (InverterSpec s : in.catalog().inverters()) {
+            for (int n = 1; n <= in.invertersInParallelFor(s); n++) {
+                out.add(assess(s.inParallel(n), in));
+            }
+        }
+        return out;
     }
 
     static InverterAssessment assess(InverterSpec s, SizingInput in) {
@@ -208,7 +223,7 @@ public final class Sizing {
                                      SystemPin pin) {
         List<InverterAssessment> atClass = all.stream().filter(a -> a.spec().busClassV() == cls).toList();
         List<InverterAssessment> passing = atClass.stream().filter(InverterAssessment::passes)
-                .filter(a -> pin == null || a.spec().id().equals(pin.inverterId()))
+                .filter(a -> pin == null || pin.isInverter(a.spec()))
                 .sorted(Comparator.comparingDouble((InverterAssessment a) -> a.spec().price())
                         .thenComparingDouble(a -> a.spec().continuousW()))
                 .toList();
@@ -287,7 +302,7 @@ public final class Sizing {
         }
         InverterAssessment biggest = matching.stream().max(Comparator.comparingDouble(a -> a.spec().continuousW())).get();
         Check c = biggest.firstFailure();
-        return String.format(Locale.ROOT, "largest, %s: %s %.0f %s < %.0f %s", biggest.spec().id(), c.label(),
+        return String.format(Locale.ROOT, "largest, %s: %s %.0f %s < %.0f %s", biggest.spec().label(), c.label(),
                 c.value(), c.unit(), c.limit(), c.unit());
     }
 

@@ -39,6 +39,8 @@ import org.holdover.project.ProjectInput;
  * @param maxUnmetFraction  unmet energy the simulated year may leave, fraction of the served energy
  * @param batteryDesignC    typical battery temperature, °C (charging limits in the simulated year)
  * @param solar             the solar resource and array settings, or null when the project has no solar section
+ * @param generator         the generator rules ({@link GeneratorRules#NONE} without a generator)
+ * @param maxInvertersInParallel project cap on identical inverters in parallel (each unit's catalog limit applies too)
  */
 public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms, double frequencyHz, boolean splitPhase,
                           double inverterAmbientC, double batteryColdestC, double inverterMargin,
@@ -47,8 +49,16 @@ public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms
                           double autonomyDays, LoadAnalysis loads, Catalog catalog, List<Assumption> assumptions,
                           List<Problem> warnings, List<String> notes, double[] measuredW,
                           double profileScale, boolean profileServed, WiringRules wiring,
-                          double maxUnmetFraction, double batteryDesignC, SolarSetup solar, GeneratorRules generator) {
+                          double maxUnmetFraction, double batteryDesignC, SolarSetup solar, GeneratorRules generator,
+                          int maxInvertersInParallel) {
+
+    /** Inverters in parallel when the project does not say: a bound on the search, not a rule of the trade. */
+    public static final int DEFAULT_MAX_INVERTERS_IN_PARALLEL = 4;
+
     public SizingInput {
+        if (maxInvertersInParallel < 1) {
+            throw new IllegalArgumentException("maxInvertersInParallel must be >= 1");
+        }
         generator = generator == null ? GeneratorRules.NONE : generator;
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(mode, "mode");
@@ -64,6 +74,21 @@ public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms
         if (mode == ProjectInput.Mode.OFF_GRID && !(autonomyDays > 0)) {
             throw new IllegalArgumentException("off-grid mode needs autonomy days > 0");
         }
+    }
+
+    /** With the default cap on inverters in parallel. */
+    public SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms, double frequencyHz, boolean splitPhase,
+                       double inverterAmbientC, double batteryColdestC, double inverterMargin,
+                       double maxBatteryCurrentA, int maxParallelRule, Chemistry chemistry, Double depthOfDischarge,
+                       Double endOfLife, ProjectInput.BatteryLocation location, double outageHours,
+                       double autonomyDays, LoadAnalysis loads, Catalog catalog, List<Assumption> assumptions,
+                       List<Problem> warnings, List<String> notes, double[] measuredW,
+                       double profileScale, boolean profileServed, WiringRules wiring,
+                       double maxUnmetFraction, double batteryDesignC, SolarSetup solar, GeneratorRules generator) {
+        this(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin, maxBatteryCurrentA,
+                maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours, autonomyDays, loads, catalog,
+                assumptions, warnings, notes, measuredW, profileScale, profileServed, wiring, maxUnmetFraction, batteryDesignC, solar,
+                generator, DEFAULT_MAX_INVERTERS_IN_PARALLEL);
     }
 
     /** Without generator rules (no generator). */
@@ -86,7 +111,7 @@ public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms
         return new SizingInput(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin,
                 maxBatteryCurrentA, maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours, autonomyDays,
                 loads, catalog, assumptions, warnings, notes, measuredW, profileScale, profileServed, wiring, maxUnmetFraction,
-                batteryDesignC, solar, g);
+                batteryDesignC, solar, g, maxInvertersInParallel);
     }
 
     /** The same input with another catalog. */
@@ -94,7 +119,7 @@ public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms
         return new SizingInput(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin,
                 maxBatteryCurrentA, maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours, autonomyDays,
                 loads, c, assumptions, warnings, notes, measuredW, profileScale, profileServed, wiring, maxUnmetFraction,
-                batteryDesignC, solar, generator);
+                batteryDesignC, solar, generator, maxInvertersInParallel);
     }
 
     /** The same input with other cable runs and conductor rules. */
@@ -102,6 +127,19 @@ public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms
         return new SizingInput(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin,
                 maxBatteryCurrentA, maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours, autonomyDays,
                 loads, catalog, assumptions, warnings, notes, measuredW, profileScale, profileServed, w, maxUnmetFraction,
-                batteryDesignC, solar, generator);
+                batteryDesignC, solar, generator, maxInvertersInParallel);
+    }
+
+    /** The same input with another cap on inverters in parallel. */
+    public SizingInput withMaxInvertersInParallel(int n) {
+        return new SizingInput(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin,
+                maxBatteryCurrentA, maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours, autonomyDays,
+                loads, catalog, assumptions, warnings, notes, measuredW, profileScale, profileServed, wiring, maxUnmetFraction,
+                batteryDesignC, solar, generator, n);
+    }
+
+    /** Unit counts to try for a catalog inverter: 1 to the smaller of its own limit and the project's. */
+    public int invertersInParallelFor(org.holdover.inverter.InverterSpec unit) {
+        return Math.min(unit.maxInParallel(), maxInvertersInParallel);
     }
 }

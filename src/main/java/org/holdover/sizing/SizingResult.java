@@ -21,12 +21,24 @@ import org.holdover.battery.BankRequirement;
  * @param solar             the PV array and charge controller(s), or null (no solar section, or no system chosen)
  * @param pvCircuits        the PV-side conductors, or null without an array
  * @param search            what the system search found (null when the rules alone were run)
+ * @param generator         the chosen engine generator, or null
+ * @param inverterLeads     each inverter's leads from the common bus bar when inverters run in parallel, else null
  */
 public record SizingResult(SizingInput input, List<InverterAssessment> inverters, List<BusOption> buses,
                            BusOption chosen, EnergyBasis energy, BankRequirement requirement, List<Check> checks,
                            List<Check> advisories, double cecEfficiency, double euroEfficiency,
                            YearCheck year, SolarDesign solar, PvCircuits pvCircuits,
-                           SearchResult search, org.holdover.catalog.GeneratorItem generator) {
+                           SearchResult search, org.holdover.catalog.GeneratorItem generator, InverterLeads inverterLeads) {
+
+    /** A single inverter (no leads from a bus bar). */
+    public SizingResult(SizingInput input, List<InverterAssessment> inverters, List<BusOption> buses,
+                        BusOption chosen, EnergyBasis energy, BankRequirement requirement, List<Check> checks,
+                        List<Check> advisories, double cecEfficiency, double euroEfficiency,
+                        YearCheck year, SolarDesign solar, PvCircuits pvCircuits, SearchResult search,
+                        org.holdover.catalog.GeneratorItem generator) {
+        this(input, inverters, buses, chosen, energy, requirement, checks, advisories, cecEfficiency, euroEfficiency, year, solar,
+                pvCircuits, search, generator, null);
+    }
 
     /** Without a generator. */
     public SizingResult(SizingInput input, List<InverterAssessment> inverters, List<BusOption> buses,
@@ -34,7 +46,7 @@ public record SizingResult(SizingInput input, List<InverterAssessment> inverters
                         List<Check> advisories, double cecEfficiency, double euroEfficiency,
                         YearCheck year, SolarDesign solar, PvCircuits pvCircuits, SearchResult search) {
         this(input, inverters, buses, chosen, energy, requirement, checks, advisories, cecEfficiency, euroEfficiency, year, solar,
-                pvCircuits, search, null);
+                pvCircuits, search, null, null);
     }
 
     public SizingResult {
@@ -67,6 +79,6 @@ public record SizingResult(SizingInput input, List<InverterAssessment> inverters
     /** The same result with the search's findings. */
     public SizingResult withSearch(SearchResult s) {
         return new SizingResult(input, inverters, buses, chosen, energy, requirement, checks, advisories, cecEfficiency,
-                euroEfficiency, year, solar, pvCircuits, s, generator);
+                euroEfficiency, year, solar, pvCircuits, s, generator, inverterLeads);
     }
 }

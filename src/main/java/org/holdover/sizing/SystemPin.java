@@ -7,24 +7,36 @@ import java.util.Objects;
  *
  * @param busClassV       DC bus class, V
  * @param inverterId      catalog inverter
+ * @param inverters       identical inverters in parallel (at least 1)
  * @param batteryModuleId catalog battery module
  * @param strings         parallel battery strings (at least what the bank's requirement asks for)
  * @param pv              the PV layout, or null without PV
  * @param generatorId     catalog generator, or null without one
  */
-public record SystemPin(double busClassV, String inverterId, String batteryModuleId, int strings, PvPin pv, String generatorId) {
+public record SystemPin(double busClassV, String inverterId, int inverters, String batteryModuleId, int strings, PvPin pv,
+                        String generatorId) {
 
-    /** A system without a generator. */
+    /** A system with one inverter. */
+    public SystemPin(double busClassV, String inverterId, String batteryModuleId, int strings, PvPin pv, String generatorId) {
+        this(busClassV, inverterId, 1, batteryModuleId, strings, pv, generatorId);
+    }
+
+    /** A system with one inverter and without a generator. */
     public SystemPin(double busClassV, String inverterId, String batteryModuleId, int strings, PvPin pv) {
-        this(busClassV, inverterId, batteryModuleId, strings, pv, null);
+        this(busClassV, inverterId, 1, batteryModuleId, strings, pv, null);
     }
 
     public SystemPin {
         Objects.requireNonNull(inverterId, "inverterId");
         Objects.requireNonNull(batteryModuleId, "batteryModuleId");
-        if (strings < 1) {
-            throw new IllegalArgumentException("strings must be >= 1");
+        if (strings < 1 || inverters < 1) {
+            throw new IllegalArgumentException("strings and inverters must be >= 1");
         }
+    }
+
+    /** Whether an inverter (a catalog unit or units in parallel) is the pinned one. */
+    public boolean isInverter(org.holdover.inverter.InverterSpec s) {
+        return s.id().equals(inverterId) && s.units() == inverters;
     }
 
     /**

@@ -30,7 +30,8 @@ import org.holdover.sizing.SearchResult.Sensitivity;
 /**
  * The search for the least-cost system that passes every check.
  *
- * <p>Candidates are every combination the catalog allows: bus class × inverter × battery module × parallel strings
+ * <p>Candidates are every combination the catalog allows: bus class × inverter × identical inverters in parallel (1 up to
+ * the smaller of the unit's catalog limit and the project's {@code rules.maxInvertersInParallel}) × battery module × parallel strings
  * (from what the battery sizing asks for up to the most allowed) × PV module × charge controller × modules per
  * string × strings × controllers (from what the PV sizing asks for up to {@value #EXTRA_PV_SHARE} more, at least
  * {@value #EXTRA_PV_MIN} more strings) × generator (none, or, when the project allows one, each catalog set that suits the
@@ -345,6 +346,7 @@ public final class SystemSearch {
             .thenComparingDouble(c -> c.candidate.cost())
             .thenComparingDouble(c -> c.g.busClassV())
             .thenComparing(c -> c.candidate.pin().inverterId())
+            .thenComparingInt(c -> c.candidate.pin().inverters())
             .thenComparing(c -> c.candidate.pin().batteryModuleId())
             .thenComparingInt(c -> c.candidate.pin().strings())
             .thenComparing(c -> c.pv.pin() == null ? "" : c.pv.pin().moduleId())
@@ -496,26 +498,39 @@ public final class SystemSearch {
         if (in.wiring().busVoltageV() > 0) {
             classes.removeIf(c -> c != in.wiring().busVoltageV());
         }
-        for (InverterSpec spec : in.catalog().inverters()) {
-            if (!classes.contains(spec.busClassV())) {
-                continue;
-            }
+        for (InverterSpec unit : in.catalog().inverters()) {
+          if (!classes.contains(unit.busClassV())) {
+              continue;
+          }
+          int most = in.invertersInParallelFor(unit);
+          // The inverter's own checks at each count of units in parallel; a count that fails is reported once per unit:
+          // every count failing, or the counts below the first that passes.
+          String lastWhy = null;
+          int failFrom = 0;
+          for (int units = 1; units <= most; units++) {
+            InverterSpec spec = unit.inParallel(units);
             double cls = spec.busClassV();
             InverterAssessment a = Sizing.assess(spec, in);
             checks++;
-            String invFamily = fmt(cls) + " V, " + spec.id();
+            String invFamily = fmt(cls) + " V, " + spec.label();
             if (!a.acMatch()) {
-                rejected.add(new Rejection(invFamily, a.acMismatch()));
+                rejected.add(new Rejection(fmt(cls) + " V, " + unit.id(), a.acMismatch()));
+                break;
+            }
+            Check current = a.passes() ? Sizing.currentCheck(in, a) : null;
+            String why = !a.passes() ? failure(a.firstFailure()) : !current.passes() ? failure(current) : null;
+            if (why != null) {
+                lastWhy = why;
+                failFrom = failFrom == 0 ? units : failFrom;
+                if (units == most) {
+                    rejected.add(unitsRejection(cls, unit, failFrom, units, most, why));
+                }
                 continue;
             }
-            if (!a.passes()) {
-                rejected.add(new Rejection(invFamily, failure(a.firstFailure())));
-                continue;
-            }
-            Check current = Sizing.currentCheck(in, a);
-            if (!current.passes()) {
-                rejected.add(new Rejection(invFamily, failure(current)));
-                continue;
+            if (lastWhy != null) {
+                rejected.add(unitsRejection(cls, unit, failFrom, units - 1, most, lastWhy));
+                lastWhy = null;
+                failFrom = 0;
             }
             EnergyBasis energy = Sizing.energy(in, spec.loss());
             for (BatteryModule m : in.catalog().batteryModules()) {
@@ -539,6 +554,8 @@ public final class SystemSearch {
                 }
                 List<BankPart> banks = new ArrayList<>();
                 String last = "";
+                InverterLeads leads = InverterLeads.size(in, spec, base.bankNominalV());
+                List<Check> leadChecks = leads == null ? List.of() : leads.checks();
                 for (int p = base.strings(); p <= base.maxParallel(); p++) {
                     BankDesign d = base.withStrings(p);
                     checks++;
@@ -549,6 +566,7 @@ public final class SystemSearch {
                     }
                     List<Check> cs = new ArrayList<>(Sizing.bankChecks(d, spec, energy));
                     cs.addAll(Sizing.dcChecks(dc));
+                    cs.addAll(leadChecks);
                     Check f = cs.stream().filter(x -> !x.passes()).findFirst().orElse(null);
                     if (f != null) {
                         last = failure(f);
@@ -563,6 +581,7 @@ public final class SystemSearch {
                 }
                 pending.add(new Pending(cls, a, current, energy, base, banks, bankFamily));
             }
+          }
         }
         // The PV layouts of each inverter and module, on all cores (each is independent); gathered in order.
         List<PvWork> pv = pending.parallelStream().map(x -> pvWork(in, x)).toList();
@@ -616,6 +635,17 @@ public final class SystemSearch {
             }
         }
         return new Work(out, rejected, families, checks);
+    }
+
+    /**
+     * A unit left out at the counts {@code from} to {@code to} in parallel, with the reason at {@code to} (a failure of
+     * the power checks at the larger count holds for the smaller ones too: every rating is × units).
+     */
+    private static Rejection unitsRejection(double cls, InverterSpec unit, int from, int to, int most, String why) {
+        String name = most == 1 ? unit.id() : from == to ? (to == 1 ? unit.id() + " alone" : to + " × " + unit.id())
+                : unit.id() + " (" + from + " to " + to + " in parallel)";
+        String at = most == 1 || from == to ? "" : to + " in parallel: ";
+        return new Rejection(fmt(cls) + " V, " + name, at + why);
     }
 
     private record Layouts(List<PvPart> parts, long checked, String last) {
@@ -759,16 +789,17 @@ public final class SystemSearch {
 
     private static Candidate candidate(Group g, BankPart b, PvPart pv, GenPart gen) {
         BankDesign d = b.design();
-        SystemPin pin = new SystemPin(g.busClassV(), g.inverter().spec().id(), d.module().id(), d.strings(), pv.pin(),
+        InverterSpec inv = g.inverter().spec();
+        SystemPin pin = new SystemPin(g.busClassV(), inv.id(), inv.units(), d.module().id(), d.strings(), pv.pin(),
                 gen == null ? null : gen.item().id());
-        String family = fmt(g.busClassV()) + " V, " + g.inverter().spec().id() + ", " + d.module().id()
+        String family = fmt(g.busClassV()) + " V, " + inv.label() + ", " + d.module().id()
                 + (pv.pin() == null ? "" : ", " + pv.pin().moduleId() + " on " + pv.pin().controllerId())
                 + (gen == null ? "" : ", generator " + gen.item().id());
         double margin = Double.isNaN(pv.margin()) ? b.margin() : Math.min(b.margin(), pv.margin());
         if (gen != null && !Double.isNaN(gen.margin())) {
             margin = Double.isNaN(margin) ? gen.margin() : Math.min(margin, gen.margin());
         }
-        return new Candidate(pin, family, g.inverter().spec().price(), d.modules(), d.module().price(), pv.modules(),
+        return new Candidate(pin, family, inv.catalogUnit().price(), d.modules(), d.module().price(), pv.modules(),
                 pv.pair() == null ? 0 : pv.pair().mi().price(), pv.pin() == null ? 0 : pv.pin().controllers(),
                 pv.pair() == null ? 0 : pv.pair().ci().price(), d.bankEnergyWh() / 1000.0, pv.stcW() / 1000.0, margin,
                 gen == null ? 0 : gen.item().price());
@@ -808,8 +839,8 @@ public final class SystemSearch {
             if (pin != null && pin.totalStrings() < pv.neededStrings()) {
                 notes.add("less PV than the PV sizing asks for (" + pv.neededStrings() + " strings)");
             }
-            Candidate cand = new Candidate(new SystemPin(c.g.busClassV(), c.candidate.pin().inverterId(), d.module().id(), job.p, pin,
-                    c.candidate.pin().generatorId()),
+            Candidate cand = new Candidate(new SystemPin(c.g.busClassV(), c.candidate.pin().inverterId(),
+                    c.candidate.pin().inverters(), d.module().id(), job.p, pin, c.candidate.pin().generatorId()),
                     c.candidate.family(), c.candidate.inverterPrice(), d.modules(), d.module().price(), modules,
                     c.candidate.pvModulePrice(), c.candidate.controllers(), c.candidate.controllerPrice(), d.bankEnergyWh() / 1000.0,
                     stc / 1000.0, Double.NaN, c.candidate.generatorPrice());

@@ -13,12 +13,22 @@ import org.holdover.dc.TableSystem;
  * @param system             conductor tables (NEC AWG or IEC mm²)
  * @param fineStranded       battery cables are fine-stranded
  * @param busVoltageV        consider only this bus class, V (0: choose)
+ * @param busBarToInverterM  one-way length of each inverter's own leads from the common DC bus bar, when inverters run in
+ *                           parallel, m
  */
 public record WiringRules(double batteryToInverterM, double batteryToControllerM, double pvToControllerM,
                           double maxVoltageDropPct, double ambientC, TableSystem system,
-                          boolean fineStranded, double busVoltageV) {
+                          boolean fineStranded, double busVoltageV, double busBarToInverterM) {
+
+    /** With the default length of the inverters' own leads. */
+    public WiringRules(double batteryToInverterM, double batteryToControllerM, double pvToControllerM,
+                       double maxVoltageDropPct, double ambientC, TableSystem system, boolean fineStranded, double busVoltageV) {
+        this(batteryToInverterM, batteryToControllerM, pvToControllerM, maxVoltageDropPct, ambientC, system, fineStranded,
+                busVoltageV, InverterLeads.DEFAULT_LEAD_M);
+    }
+
     public WiringRules {
-        if (!(batteryToInverterM > 0) || !(maxVoltageDropPct > 0) || system == null) {
+        if (!(batteryToInverterM > 0) || !(maxVoltageDropPct > 0) || !(busBarToInverterM > 0) || system == null) {
             throw new IllegalArgumentException("wiring rules need a length, a drop limit and a table system");
         }
     }

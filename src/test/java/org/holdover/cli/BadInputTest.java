@@ -92,6 +92,10 @@ class BadInputTest {
                 c("negative load growth", BASE + "rules: { loadGrowthPct: -5 }\n", "rules.loadGrowthPct: must be 0–200 %, got -5"),
                 c("zero cost horizon", BASE + "rules: { costHorizonYears: 0 }\n",
                         "rules.costHorizonYears: must be greater than 0 years and at most 100 years, got 0"),
+                c("no inverters at all", BASE + "rules: { maxInvertersInParallel: 0 }\n",
+                        "rules.maxInvertersInParallel: must be 1–12, got 0"),
+                c("zero-length inverter leads", BASE + "wiring: { busBarToInverterM: 0 }\n",
+                        "wiring.busBarToInverterM: must be greater than 0 m and at most 100 m, got 0"),
                 c("misspelt search rule", BASE + "rules: { alternatves: 2 }\n",
                         "rules.alternatves: unknown field \"alternatves\"; did you mean \"alternatives\"?"));
     }

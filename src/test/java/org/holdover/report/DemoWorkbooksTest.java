@@ -33,14 +33,16 @@ import org.junit.jupiter.api.TestInstance;
 class DemoWorkbooksTest {
 
     /**
-     * The two demos, their lifetime-cost and generator variants (cycle charging and load following), and the two
+     * The two demos, their lifetime-cost and generator variants (cycle charging and load following), the whole-shop
+     * variant (identical inverters in parallel), and the two
      * starter projects of {@code holdover init}: their loads repeat day after day, so months and outage windows tie exactly, which is where a spreadsheet's own summation order could pick
      * another month than the engine did.
      */
     static final List<String> DEMOS = List.of("examples/farm-shop-backup.yaml", "examples/ridge-cabin-offgrid.yaml",
             "src/main/resources/org/holdover/cli/starter-backup.yaml", "src/main/resources/org/holdover/cli/starter-off-grid.yaml",
             "examples/variants/cabin-lifetime-cost.yaml", "examples/variants/cabin-generator.yaml",
-            "examples/variants/cabin-generator-load-following.yaml", "examples/variants/cabin-generator-lifetime.yaml");
+            "examples/variants/cabin-generator-load-following.yaml", "examples/variants/cabin-generator-lifetime.yaml",
+            "examples/variants/farm-shop-whole-shop.yaml");
     private final List<Path> workbooks = new ArrayList<>();
 
     @BeforeAll
@@ -55,6 +57,10 @@ class DemoWorkbooksTest {
                 // The generator variants exist to show a chosen system with a generator running in the simulated year.
                 assertThat(r.generator()).as(demo + " chooses a generator").isNotNull();
                 assertThat(r.year().metrics().generator().hours()).as(demo + " runs it").isPositive();
+            }
+            if (demo.contains("whole-shop")) {
+                // The whole-shop variant exists to show a chosen system with identical inverters in parallel.
+                assertThat(r.inverter().spec().units()).as(demo + " puts inverters in parallel").isGreaterThan(1);
             }
             Path out = dir.resolve(project.getFileName().toString().replace(".yaml", ".xlsx"));
             WorkbookWriter.write(r, out, true);
