@@ -3,7 +3,6 @@ package org.holdover.sizing;
 import java.util.Arrays;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
-import java.util.stream.IntStream;
 import org.holdover.project.InputException;
 import org.holdover.project.ProjectReader;
 import org.openjdk.jmh.annotations.Benchmark;
@@ -65,17 +64,20 @@ public class SystemSearchBenchmark {
 
     private final SystemSearch.Conditions cache = new SystemSearch.Conditions();
 
-    /** A batch of candidates on all cores, as the search runs them, sharing conditions (one operation = one candidate). */
+    /**
+     * A batch of candidates on all cores, as the search runs them: the next {@value #BATCH} in cost order, handed to the
+     * threads grouped by inverter and battery module, sharing conditions (one operation = one candidate).
+     */
     @Benchmark
     @OperationsPerInvocation(BATCH)
     public double simulateBatchAllCores() {
         int from = next;
         next += BATCH;
-        double[] out = new double[BATCH];
-        IntStream.range(0, BATCH).parallel().forEach(k ->
-                out[k] = SystemSearch.simulate(cabin, candidates.get((from + k) % candidates.size()), batteryTemp, "",
-                        SearchResult.Objective.CAPITAL, cache).unmetWh());
-        return out[0];
+        List<SystemSearch.Cand> batch = new java.util.ArrayList<>(BATCH);
+        for (int k = 0; k < BATCH; k++) {
+            batch.add(candidates.get((from + k) % candidates.size()));
+        }
+        return SystemSearch.simulateBatch(cabin, batch, batteryTemp, SearchResult.Objective.CAPITAL, cache)[0].unmetWh();
     }
 
     /** The whole search with its frontier and sensitivity cases (one operation = one search). */

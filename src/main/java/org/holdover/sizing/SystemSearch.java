@@ -204,9 +204,7 @@ public final class SystemSearch {
                 }
             }
             List<Cand> tops = new ArrayList<>(corners.values());
-            Evaluated[] r = new Evaluated[tops.size()];
-            IntStream.range(0, tops.size()).parallel()
-                    .forEach(k -> r[k] = simulate(in, tops.get(k), batteryTemp, "", objective, cache));
+            Evaluated[] r = simulateBatch(in, tops, batteryTemp, objective, cache);
             simulated += tops.size();
             for (int k = 0; k < tops.size(); k++) {
                 Cand c = tops.get(k);
@@ -241,10 +239,7 @@ public final class SystemSearch {
             if (batch.isEmpty()) {
                 continue;
             }
-            Evaluated[] results = new Evaluated[batch.size()];
-            IntStream.range(0, batch.size()).parallel()
-                    .forEach(k -> results[k] = simulated(in, batch.get(k))
-                            ? simulate(in, batch.get(k), batteryTemp, "", objective, cache) : unsimulated(batch.get(k), objective));
+            Evaluated[] results = simulateBatch(in, batch, batteryTemp, objective, cache);
             for (int k = 0; k < batch.size(); k++) {
                 Evaluated e = results[k];
                 Cand c = batch.get(k);
@@ -421,6 +416,32 @@ public final class SystemSearch {
         YearCheck.Prepared p = YearCheck.prepare(y, in, c.bank.design(), c.g.inverter().spec().loss(), c.pv.seriesW(strings),
                 c.pv.efficiency(), c.pv.limitW(), c.gen == null ? java.util.Optional.empty() : java.util.Optional.of(c.gen.sim()));
         return evaluate(p, c.bank.design(), c.candidate, designNote, y.unmetLimitWh(), objective, fuelPrice(in));
+    }
+
+    /**
+     * A batch of candidates on all cores, results in the batch's order. The candidates are handed to the threads grouped
+     * by inverter and battery module (first appearance first): each thread then works through one group's shared year at a
+     * time, which keeps its arrays in the processor's cache (measured: with the batch in cost order, where groups
+     * interleave, the cabin's candidates ran at about 60 % of the grouped rate).
+     */
+    static Evaluated[] simulateBatch(SizingInput in, List<Cand> batch, double[] batteryTemp, SearchResult.Objective objective,
+                                     Conditions cache) {
+        Map<Group, Integer> groupOrder = new java.util.IdentityHashMap<>();
+        for (Cand c : batch) {
+            groupOrder.putIfAbsent(c.g, groupOrder.size());
+        }
+        Integer[] order = new Integer[batch.size()];
+        for (int k = 0; k < order.length; k++) {
+            order[k] = k;
+        }
+        java.util.Arrays.sort(order, Comparator.comparingInt((Integer k) -> groupOrder.get(batch.get(k).g)));
+        Evaluated[] results = new Evaluated[batch.size()];
+        IntStream.range(0, order.length).parallel().forEach(j -> {
+            int k = order[j];
+            Cand c = batch.get(k);
+            results[k] = simulated(in, c) ? simulate(in, c, batteryTemp, "", objective, cache) : unsimulated(c, objective);
+        });
+        return results;
     }
 
     /** The shared year of each group (inverter and battery module). */
