@@ -130,6 +130,17 @@ public final class TiltSearch {
      * @return one result per module, in the same order
      */
     public static List<Result> searchAll(Input in, List<PvModule> modules) {
+        return searchAll(in, modules, null);
+    }
+
+    /**
+     * As {@link #searchAll(Input, List)}, with the irradiance and performance ratios taken from a memo made for the
+     * same weather, sun path and losses (null: computed here).
+     */
+    public static List<Result> searchAll(Input in, List<PvModule> modules, PlaneMemo memo) {
+        if (memo != null && !memo.isFor(in.weather(), in.sunPath(), in.losses())) {
+            throw new IllegalArgumentException("the memo was made for another weather year, sun path or losses");
+        }
         if (modules.isEmpty()) {
             throw new IllegalArgumentException("need at least one module");
         }
@@ -142,11 +153,12 @@ public final class TiltSearch {
         for (double tilt : in.tiltsDeg()) {
             PoaSettings s = in.settings().withOrientation(
                     new SurfaceOrientation(tilt, in.settings().orientation().azimuthDeg()));
-            PoaSeries poa = PlaneOfArray.hourly(in.weather(), in.sunPath(), s);
-            double[] psh = poa.monthlyPeakSunHours(false);
+            PoaSeries poa = memo == null ? PlaneOfArray.hourly(in.weather(), in.sunPath(), s) : null;
+            double[] psh = memo == null ? poa.monthlyPeakSunHours(false) : memo.peakSunHours(s);
             for (int i = 0; i < modules.size(); i++) {
-                ArrayDcSeries dc = ArrayDcSeries.compute(new PvArray(modules.get(i), 1, 1), poa, air, in.losses());
-                double[] pr = dc.monthlyDcPerformanceRatio();
+                double[] pr = memo == null
+                        ? ArrayDcSeries.compute(new PvArray(modules.get(i), 1, 1), poa, air, in.losses()).monthlyDcPerformanceRatio()
+                        : memo.monthlyPerformanceRatio(s, modules.get(i));
                 double[] derate = new double[12];
                 for (int m = 0; m < 12; m++) {
                     // A month without sun has no derate; any positive value gives +∞ need when there is load.

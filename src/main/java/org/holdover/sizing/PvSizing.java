@@ -130,6 +130,11 @@ public final class PvSizing {
      * fixed one; or the design saying why none can be sized.
      */
     public static Pairs pairs(SizingInput in, BusOption chosen, EnergyBasis energy) {
+        return pairs(in, chosen, energy, null);
+    }
+
+    /** As above, with the irradiance and performance ratios from a memo made for the project's solar setup (or null). */
+    public static Pairs pairs(SizingInput in, BusOption chosen, EnergyBasis energy, org.holdover.pv.PlaneMemo memo) {
         SolarSetup s = in.solar();
         BankDesign bank = chosen.bank();
         double rte = bank.module().chemistry().roundTripEfficiency();
@@ -165,15 +170,18 @@ public final class PvSizing {
         int infeasible = 0;
         int sunlessMonths = 0;
         List<PvModuleItem> modules = in.catalog().pvModules();
-        List<TiltSearch.Result> searches = tilts(s, modules, forTilt, rte);
+        List<TiltSearch.Result> searches = tilts(s, modules, forTilt, rte, memo);
         for (int mIndex = 0; mIndex < modules.size(); mIndex++) {
             PvModuleItem mi = modules.get(mIndex);
             TiltSearch.Result tr = searches.get(mIndex);
             double tilt = tr.chosen().tiltDeg();
-            PoaSeries poa = PlaneOfArray.hourly(s.weather(), s.sunPath(), s.settings().withOrientation(
-                    new SurfaceOrientation(tilt, s.settings().orientation().azimuthDeg())));
-            double[] psh = poa.monthlyPeakSunHours(false);
-            double[] prRaw = ArrayDcSeries.compute(new PvArray(mi.module(), 1, 1), poa, air, s.losses()).monthlyDcPerformanceRatio();
+            org.holdover.solar.PoaSettings at = s.settings().withOrientation(
+                    new SurfaceOrientation(tilt, s.settings().orientation().azimuthDeg()));
+            PoaSeries poa = memo == null ? PlaneOfArray.hourly(s.weather(), s.sunPath(), at) : memo.poa(at);
+            double[] psh = memo == null ? poa.monthlyPeakSunHours(false) : memo.peakSunHours(at);
+            double[] prRaw = memo == null
+                    ? ArrayDcSeries.compute(new PvArray(mi.module(), 1, 1), poa, air, s.losses()).monthlyDcPerformanceRatio()
+                    : memo.monthlyPerformanceRatio(at, mi.module());
             double[] pr = new double[12];
             for (int m = 0; m < 12; m++) {
                 pr[m] = Double.isNaN(prRaw[m]) || prRaw[m] <= 0 ? 0.0 : prRaw[m];
@@ -262,18 +270,19 @@ public final class PvSizing {
      * smoothly with tilt). Each result lists every tilt tried, in increasing order; its best is the tilt needing the
      * smallest array, ties to the lower tilt.
      */
-    static List<TiltSearch.Result> tilts(SolarSetup s, List<PvModuleItem> items, double[] dailyWh, double rte) {
+    static List<TiltSearch.Result> tilts(SolarSetup s, List<PvModuleItem> items, double[] dailyWh, double rte,
+                                         org.holdover.pv.PlaneMemo memo) {
         double[] all = s.tiltsDeg();
         List<org.holdover.pv.PvModule> modules = items.stream().map(PvModuleItem::module).toList();
         if (all.length <= 2 * COARSE_EVERY) {
-            return TiltSearch.searchAll(input(s, all, modules.get(0), dailyWh, rte), modules);
+            return TiltSearch.searchAll(input(s, all, modules.get(0), dailyWh, rte), modules, memo);
         }
         java.util.TreeSet<Integer> coarse = new java.util.TreeSet<>();
         for (int i = 0; i < all.length; i += COARSE_EVERY) {
             coarse.add(i);
         }
         coarse.add(all.length - 1);
-        List<TiltSearch.Result> first = TiltSearch.searchAll(input(s, pick(all, coarse), modules.get(0), dailyWh, rte), modules);
+        List<TiltSearch.Result> first = TiltSearch.searchAll(input(s, pick(all, coarse), modules.get(0), dailyWh, rte), modules, memo);
         java.util.TreeSet<Integer> fine = new java.util.TreeSet<>();
         for (TiltSearch.Result r : first) {
             int centre = indexOf(all, r.chosen().tiltDeg());
@@ -286,7 +295,7 @@ public final class PvSizing {
         if (fine.isEmpty()) {
             return first;
         }
-        List<TiltSearch.Result> second = TiltSearch.searchAll(input(s, pick(all, fine), modules.get(0), dailyWh, rte), modules);
+        List<TiltSearch.Result> second = TiltSearch.searchAll(input(s, pick(all, fine), modules.get(0), dailyWh, rte), modules, memo);
         List<TiltSearch.Result> merged = new ArrayList<>();
         for (int k = 0; k < modules.size(); k++) {
             List<TiltSearch.Option> opts = new ArrayList<>(first.get(k).options());

@@ -605,7 +605,10 @@ public final class SystemSearch {
           }
         }
         // The PV layouts of each inverter and module, on all cores (each is independent); gathered in order.
-        List<PvWork> pv = pending.parallelStream().map(x -> pvWork(in, x)).toList();
+        // Every inverter and battery module asks for the same orientations: their irradiance is computed once.
+        org.holdover.pv.PlaneMemo memo = in.solar() == null ? null
+                : new org.holdover.pv.PlaneMemo(in.solar().weather(), in.solar().sunPath(), in.solar().losses());
+        List<PvWork> pv = pending.parallelStream().map(x -> pvWork(in, x, memo)).toList();
         for (int k = 0; k < pending.size(); k++) {
             Pending x = pending.get(k);
             PvWork w = pv.get(k);
@@ -680,7 +683,7 @@ public final class SystemSearch {
     private record PvWork(List<PvPart> parts, List<Rejection> rejected, long checks, int families) {
     }
 
-    private static PvWork pvWork(SizingInput in, Pending x) {
+    private static PvWork pvWork(SizingInput in, Pending x, org.holdover.pv.PlaneMemo memo) {
         List<Rejection> rejected = new ArrayList<>();
         if (in.solar() == null) {
             return new PvWork(List.of(PvPart.NONE), rejected, 0, 1);
@@ -689,7 +692,7 @@ public final class SystemSearch {
         long checks = 0;
         int families = 0;
         BusOption stub = new BusOption(x.cls, x.a, x.current, x.energy.energyDcWh(), List.of(), x.base, true, "");
-        PvSizing.Pairs pairs = PvSizing.pairs(in, stub, x.energy);
+        PvSizing.Pairs pairs = PvSizing.pairs(in, stub, x.energy, memo);
         if (pairs.failure() != null) {
             rejected.add(new Rejection(x.bankFamily, pairs.failure().reason()));
             return new PvWork(pvs, rejected, checks, families);
