@@ -520,89 +520,89 @@ public final class SystemSearch {
             classes.removeIf(c -> c != in.wiring().busVoltageV());
         }
         for (InverterSpec unit : in.catalog().inverters()) {
-          if (!classes.contains(unit.busClassV())) {
-              continue;
-          }
-          int most = in.invertersInParallelFor(unit);
-          // The inverter's own checks at each count of units in parallel; a count that fails is reported once per unit:
-          // every count failing, or the counts below the first that passes.
-          String lastWhy = null;
-          int failFrom = 0;
-          for (int units = 1; units <= most; units++) {
-            InverterSpec spec = unit.inParallel(units);
-            double cls = spec.busClassV();
-            InverterAssessment a = Sizing.assess(spec, in);
-            checks++;
-            String invFamily = fmt(cls) + " V, " + spec.label();
-            if (!a.acMatch()) {
-                rejected.add(new Rejection(fmt(cls) + " V, " + unit.id(), a.acMismatch()));
-                break;
-            }
-            Check current = a.passes() ? Sizing.currentCheck(in, a) : null;
-            String why = !a.passes() ? failure(a.firstFailure()) : !current.passes() ? failure(current) : null;
-            if (why != null) {
-                lastWhy = why;
-                failFrom = failFrom == 0 ? units : failFrom;
-                if (units == most) {
-                    rejected.add(unitsRejection(cls, unit, failFrom, units, most, why));
-                }
+            if (!classes.contains(unit.busClassV())) {
                 continue;
             }
-            if (lastWhy != null) {
-                rejected.add(unitsRejection(cls, unit, failFrom, units - 1, most, lastWhy));
-                lastWhy = null;
-                failFrom = 0;
-            }
-            EnergyBasis energy = Sizing.energy(in, spec.loss());
-            for (BatteryModule m : in.catalog().batteryModules()) {
-                if (in.chemistry() != null && m.chemistry() != in.chemistry()) {
-                    continue;
-                }
-                if (m.seriesFor(cls) == 0) {
-                    continue;
-                }
-                String bankFamily = invFamily + ", " + m.id();
-                BankDesign base = BankSizing.size(m, Sizing.requirement(in, m.chemistry(), cls, energy, a));
+            int most = in.invertersInParallelFor(unit);
+            // The inverter's own checks at each count of units in parallel; a count that fails is reported once per unit:
+            // every count failing, or the counts below the first that passes.
+            String lastWhy = null;
+            int failFrom = 0;
+            for (int units = 1; units <= most; units++) {
+                InverterSpec spec = unit.inParallel(units);
+                double cls = spec.busClassV();
+                InverterAssessment a = Sizing.assess(spec, in);
                 checks++;
-                if (!base.feasible()) {
-                    rejected.add(new Rejection(bankFamily, base.limit()));
+                String invFamily = fmt(cls) + " V, " + spec.label();
+                if (!a.acMatch()) {
+                    rejected.add(new Rejection(fmt(cls) + " V, " + unit.id(), a.acMismatch()));
+                    break;
+                }
+                Check current = a.passes() ? Sizing.currentCheck(in, a) : null;
+                String why = !a.passes() ? failure(a.firstFailure()) : !current.passes() ? failure(current) : null;
+                if (why != null) {
+                    lastWhy = why;
+                    failFrom = failFrom == 0 ? units : failFrom;
+                    if (units == most) {
+                        rejected.add(unitsRejection(cls, unit, failFrom, units, most, why));
+                    }
                     continue;
                 }
-                String inc = Sizing.incompatibility(base, spec);
-                if (!inc.isEmpty()) {
-                    rejected.add(new Rejection(bankFamily, inc));
-                    continue;
+                if (lastWhy != null) {
+                    rejected.add(unitsRejection(cls, unit, failFrom, units - 1, most, lastWhy));
+                    lastWhy = null;
+                    failFrom = 0;
                 }
-                List<BankPart> banks = new ArrayList<>();
-                String last = "";
-                InverterLeads leads = InverterLeads.size(in, spec, base.bankNominalV());
-                List<Check> leadChecks = leads == null ? List.of() : leads.checks();
-                for (int p = base.strings(); p <= base.maxParallel(); p++) {
-                    BankDesign d = base.withStrings(p);
+                EnergyBasis energy = Sizing.energy(in, spec.loss());
+                for (BatteryModule m : in.catalog().batteryModules()) {
+                    if (in.chemistry() != null && m.chemistry() != in.chemistry()) {
+                        continue;
+                    }
+                    if (m.seriesFor(cls) == 0) {
+                        continue;
+                    }
+                    String bankFamily = invFamily + ", " + m.id();
+                    BankDesign base = BankSizing.size(m, Sizing.requirement(in, m.chemistry(), cls, energy, a));
                     checks++;
-                    DcDesign dc = DcSide.evaluate(in, spec, d, List.of());
-                    if (!dc.problem().isEmpty()) {
-                        last = dc.problem();
+                    if (!base.feasible()) {
+                        rejected.add(new Rejection(bankFamily, base.limit()));
                         continue;
                     }
-                    List<Check> cs = new ArrayList<>(Sizing.bankChecks(d, spec, energy));
-                    cs.addAll(Sizing.dcChecks(dc));
-                    cs.addAll(leadChecks);
-                    Check f = cs.stream().filter(x -> !x.passes()).findFirst().orElse(null);
-                    if (f != null) {
-                        last = failure(f);
+                    String inc = Sizing.incompatibility(base, spec);
+                    if (!inc.isEmpty()) {
+                        rejected.add(new Rejection(bankFamily, inc));
                         continue;
                     }
-                    banks.add(new BankPart(d, cs.stream().mapToDouble(Check::margin).min().orElse(Double.NaN)));
+                    List<BankPart> banks = new ArrayList<>();
+                    String last = "";
+                    InverterLeads leads = InverterLeads.size(in, spec, base.bankNominalV());
+                    List<Check> leadChecks = leads == null ? List.of() : leads.checks();
+                    for (int p = base.strings(); p <= base.maxParallel(); p++) {
+                        BankDesign d = base.withStrings(p);
+                        checks++;
+                        DcDesign dc = DcSide.evaluate(in, spec, d, List.of());
+                        if (!dc.problem().isEmpty()) {
+                            last = dc.problem();
+                            continue;
+                        }
+                        List<Check> cs = new ArrayList<>(Sizing.bankChecks(d, spec, energy));
+                        cs.addAll(Sizing.dcChecks(dc));
+                        cs.addAll(leadChecks);
+                        Check f = cs.stream().filter(x -> !x.passes()).findFirst().orElse(null);
+                        if (f != null) {
+                            last = failure(f);
+                            continue;
+                        }
+                        banks.add(new BankPart(d, cs.stream().mapToDouble(Check::margin).min().orElse(Double.NaN)));
+                    }
+                    if (banks.isEmpty()) {
+                        rejected.add(new Rejection(bankFamily, "no string count from " + base.strings() + " to "
+                                + base.maxParallel() + " passes: " + last));
+                        continue;
+                    }
+                    pending.add(new Pending(cls, a, current, energy, base, banks, bankFamily));
                 }
-                if (banks.isEmpty()) {
-                    rejected.add(new Rejection(bankFamily, "no string count from " + base.strings() + " to " + base.maxParallel()
-                            + " passes: " + last));
-                    continue;
-                }
-                pending.add(new Pending(cls, a, current, energy, base, banks, bankFamily));
             }
-          }
         }
         // The PV layouts of each inverter and module, on all cores (each is independent); gathered in order.
         // Every inverter and battery module asks for the same orientations: their irradiance is computed once.
