@@ -248,10 +248,12 @@ public record ProjectInput(
      * @param albedo             ground reflectance, 0–1
      * @param controller         charge controller type to use: mppt or pwm (null: either)
      * @param refillDays         backup: days to refill the bank after an outage while carrying the loads
+     * @param systemVoltageLimitV  the code's maximum PV system voltage, V (default 600: NEC 690.7, one- and two-family
+     *                             dwellings; 1000 V for other buildings)
      */
     public record SolarInput(List<Double> monthlyGhiKwhM2Day, List<Double> monthlyAirTempC, String weatherFile,
                              Integer clearnessSeed, Double tiltDeg, Double azimuthDeg, Double albedo, String controller,
-                             Double refillDays) {
+                             Double refillDays, Double systemVoltageLimitV) {
     }
 
     /** Whether the system search may add a generator. */

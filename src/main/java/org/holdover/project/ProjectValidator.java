@@ -229,6 +229,7 @@ public final class ProjectValidator {
             error("solar.controller", "unknown controller type \"" + s.controller() + "\"", "mppt or pwm");
         }
         rangeOpenLow("solar.refillDays", s.refillDays(), 0, 30, "days");
+        rangeOpenLow("solar.systemVoltageLimitV", s.systemVoltageLimitV(), 0, 1500, "V");
     }
 
     private void twelve(String path, List<Double> values, double lo, double hi, String unit) {

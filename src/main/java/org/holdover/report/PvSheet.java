@@ -105,7 +105,8 @@ final class PvSheet {
         r = input(s, r, "Irradiance for the hot cell temperature", "PvDesignG", setup.designIrradianceWm2(), "W/m²", Styles.INT,
                 "common practice, no source");
         r = input(s, r, "Maximum PV system voltage (NEC 690.7)", "PvSystemLimitV", setup.systemVoltageLimitV(), "V", Styles.INT,
-                "one- and two-family dwellings: 600 V (other buildings 1000 V)");
+                setup.systemVoltageLimitV() == Nec690.DWELLING_LIMIT_V ? "one- and two-family dwellings: 600 V (other buildings 1000 V)"
+                        : "project (solar.systemVoltageLimitV)");
         return r + 1;
     }
 

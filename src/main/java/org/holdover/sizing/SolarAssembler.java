@@ -223,9 +223,11 @@ public final class SolarAssembler {
         assumptions.add(new Assumption("PV cells: NOCT model; irradiance for the hot-cell voltage check",
                 StringDesignConditions.DEFAULT_DESIGN_IRRADIANCE_W_M2, "W/m²", "default",
                 "T_cell = T_air + (NOCT − 20 °C) × G ÷ 800 W/m²; 1000 W/m²: " + PRACTICE));
-        assumptions.add(new Assumption("Maximum PV system voltage (NEC 690.7, one- and two-family dwellings)",
-                Nec690.DWELLING_LIMIT_V, "V", "default", "NFPA 70 (NEC) 690.7: 600 V for dwellings, 1000 V for other buildings;"
-                + " the stricter limit is applied"));
+        double systemLimitV = s.systemVoltageLimitV() != null ? s.systemVoltageLimitV() : Nec690.DWELLING_LIMIT_V;
+        assumptions.add(new Assumption(s.systemVoltageLimitV() != null ? "Maximum PV system voltage"
+                : "Maximum PV system voltage (NEC 690.7, one- and two-family dwellings)", systemLimitV, "V", given(s.systemVoltageLimitV()),
+                s.systemVoltageLimitV() != null ? "project"
+                        : "NFPA 70 (NEC) 690.7: 600 V for dwellings, 1000 V for other buildings; the stricter limit is applied"));
         assumptions.add(new Assumption("Identical charge controllers in parallel, at most", DEFAULT_MAX_CONTROLLERS, "", "default",
                 PRACTICE));
         ControllerType type = s.controller() == null ? null
@@ -239,7 +241,7 @@ public final class SolarAssembler {
         }
         return new SolarSetup(solarSite, year, weather, sunPath, resource, ghi, temp, s.tiltDeg(), tilts, settings, losses,
                 type, refill, site.recordLowC(), site.designHighC(), StringDesignConditions.DEFAULT_DESIGN_IRRADIANCE_W_M2,
-                Nec690.DWELLING_LIMIT_V, DEFAULT_MAX_CONTROLLERS);
+                systemLimitV, DEFAULT_MAX_CONTROLLERS);
     }
 
     /** The zone the project's clock times are in: the IANA zone, else the fixed offset, else longitude ÷ 15. */

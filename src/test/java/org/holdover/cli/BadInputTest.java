@@ -96,6 +96,9 @@ class BadInputTest {
                         "rules.maxInvertersInParallel: must be 1–12, got 0"),
                 c("zero-length inverter leads", BASE + "wiring: { busBarToInverterM: 0 }\n",
                         "wiring.busBarToInverterM: must be greater than 0 m and at most 100 m, got 0"),
+                c("PV system voltage above 1500 V", BASE + "solar:\n  monthlyGhiKwhM2Day: [1, 2, 3, 4, 5, 6, 6, 5, 4, 3, 2, 1]\n"
+                        + "  monthlyAirTempC: [0, 1, 4, 8, 12, 16, 19, 18, 14, 9, 4, 1]\n  systemVoltageLimitV: 2000\n",
+                        "solar.systemVoltageLimitV: must be greater than 0 V and at most 1500 V, got 2000"),
                 c("misspelt search rule", BASE + "rules: { alternatves: 2 }\n",
                         "rules.alternatves: unknown field \"alternatves\"; did you mean \"alternatives\"?"));
     }
