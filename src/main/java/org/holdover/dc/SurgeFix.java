@@ -83,18 +83,29 @@ public sealed interface SurgeFix permits SurgeFix.HigherBusVoltage, SurgeFix.Par
      *
      * @param label                  e.g. "2/0 AWG, 1 set"
      * @param roundTripResistanceOhm the new cable's out-and-back resistance, Ω, ≥ 0
+     * @param fixedOhm               the rest of the path the cable does not change (inverters' own leads), Ω, ≥ 0
      */
-    record HeavierCable(String label, double roundTripResistanceOhm) implements SurgeFix {
+    record HeavierCable(String label, double roundTripResistanceOhm, double fixedOhm) implements SurgeFix {
         public HeavierCable {
             Objects.requireNonNull(label, "label");
-            if (!(roundTripResistanceOhm >= 0)) {
-                throw new IllegalArgumentException("resistance must be >= 0, got " + roundTripResistanceOhm);
+            if (!(roundTripResistanceOhm >= 0) || !(fixedOhm >= 0)) {
+                throw new IllegalArgumentException("resistance must be >= 0, got " + roundTripResistanceOhm + " and " + fixedOhm);
             }
+        }
+
+        /** A heavier battery cable on a path with nothing else in series. */
+        public HeavierCable(String label, double roundTripResistanceOhm) {
+            this(label, roundTripResistanceOhm, 0);
+        }
+
+        /** The same cable on a path that also runs through {@code ohm} that the cable does not change (inverter leads). */
+        public HeavierCable withFixedOhm(double ohm) {
+            return new HeavierCable(label, roundTripResistanceOhm, ohm);
         }
 
         @Override
         public SurgeInput apply(SurgeInput present) {
-            return present.withCableRoundTripResistanceOhm(roundTripResistanceOhm);
+            return present.withCableRoundTripResistanceOhm(roundTripResistanceOhm + fixedOhm);
         }
 
         @Override
@@ -103,24 +114,38 @@ public sealed interface SurgeFix permits SurgeFix.HigherBusVoltage, SurgeFix.Par
         }
     }
 
+
     /**
      * Move the inverter closer to the battery: cable resistance scales with length.
      *
      * @param presentLengthM one-way length now, m, &gt; 0
      * @param newLengthM     one-way length after, m, in (0, present]
+     * @param fixedOhm       the part of the path's resistance that is not the battery cable (inverters' own leads), Ω
      */
-    record ShorterCable(double presentLengthM, double newLengthM) implements SurgeFix {
+    record ShorterCable(double presentLengthM, double newLengthM, double fixedOhm) implements SurgeFix {
         public ShorterCable {
             if (!(presentLengthM > 0) || !(newLengthM > 0) || newLengthM > presentLengthM) {
                 throw new IllegalArgumentException("need 0 < new length <= present length, got " + newLengthM
                         + " m and " + presentLengthM + " m");
             }
+            if (!(fixedOhm >= 0)) {
+                throw new IllegalArgumentException("fixed resistance must be >= 0, got " + fixedOhm);
+            }
         }
 
+        /** A shorter battery cable on a path with nothing else in series. */
+        public ShorterCable(double presentLengthM, double newLengthM) {
+            this(presentLengthM, newLengthM, 0);
+        }
+
+        /**
+         * The path's resistance with the cable shortened: the part that is not the cable ({@code fixedOhm}, the inverters'
+         * leads) stays.
+         */
         @Override
         public SurgeInput apply(SurgeInput present) {
-            return present.withCableRoundTripResistanceOhm(
-                    present.cableRoundTripResistanceOhm() * newLengthM / presentLengthM);
+            double cable = present.cableRoundTripResistanceOhm() - fixedOhm;
+            return present.withCableRoundTripResistanceOhm(fixedOhm + cable * newLengthM / presentLengthM);
         }
 
         @Override

@@ -87,7 +87,14 @@ final class WiringSheet {
                 Styles.D3, "W_RFactor");
         r = f(s, r, "Bank internal resistance", "(W_ModuleMilliohm/1000*W_RFactor)*" + bat.ref(bankRow, BatterySheet.SERIES) + "/"
                 + bat.ref(bankRow, BatterySheet.STRINGS), dc.bankOhm(), "Ω", "module × factor × in series ÷ strings", "0.000000", "W_BankOhm");
-        r = f(s, r, "Cable round-trip resistance", "W_CableOhm", dc.cableOhm(), "Ω", "above", "0.000000", "W_SurgeCableOhm");
+        if (dc.leads() != null) {
+            r = f(s, r, "Each inverter's leads ÷ inverters in parallel (round trip)", "IVL_CableOhm/InvUnits", dc.leadsOhm(), "Ω",
+                    "each unit draws its share of the start current through its own leads (block below)", "0.000000", "W_LeadsOhm");
+        } else {
+            r = in(s, r, "Inverter leads from a bus bar", 0, "Ω", "one inverter: the battery cable runs to it", "0.000000", "W_LeadsOhm");
+        }
+        r = f(s, r, "Round-trip resistance of the DC path (cable + leads)", "W_CableOhm+W_LeadsOhm", dc.cableOhm() + dc.leadsOhm(), "Ω",
+                "above", "0.000000", "W_SurgeCableOhm");
         r = f(s, r, "Surge (AC)", ctx.hasMotors() ? "SurgeW" : "RunPeakW", ctx.hasMotors() ? ctx.r.input().loads().figures().surgeW()
                 : ctx.r.input().loads().figures().runningPeakW(), "W", "Motors sheet", Styles.INT, "W_SurgeAcW");
         String p = "(W_SurgeAcW/InvRatedW)";
@@ -97,7 +104,7 @@ final class WiringSheet {
                 + bat.ref(bankRow, BatterySheet.SURGE_S) + "," + bat.ref(bankRow, BatterySheet.SURGE) + "," + bat.ref(bankRow, BatterySheet.CONT) + ")",
                 dc.peakLimitA(), "A", "strings × module short-time limit", Styles.INT, "W_PeakLimitA");
         SurgeResult.Operating o = dc.surge() instanceof SurgeResult.Operating op ? op : null;
-        double disc = dc.openCircuitV() * dc.openCircuitV() - 4.0 * dc.surgeInputW() * (dc.bankOhm() + dc.cableOhm());
+        double disc = dc.openCircuitV() * dc.openCircuitV() - 4.0 * dc.surgeInputW() * (dc.bankOhm() + dc.cableOhm() + dc.leadsOhm());
         r = f(s, r, "Discriminant V_oc² − 4·P·R (negative: the bank cannot deliver the power)",
                 "W_Voc*W_Voc-4*W_SurgeDcW*(W_BankOhm+W_SurgeCableOhm)", disc, "V²", "power balance P = V·I with V = V_oc − I·R", Styles.D2, "W_Disc");
         r = f(s, r, "Current during the start", "IF(W_Disc<0,0,2*W_SurgeDcW/(W_Voc+SQRT(W_Disc)))", o == null ? 0 : o.currentA(), "A",
@@ -139,9 +146,9 @@ final class WiringSheet {
                     String rr = nec ? "INDEX(NecRes_uncoated_stranded_ohm_per_kft,MATCH(W_Size,NecRes_size,0)+" + steps + ")*(1/304.8)"
                             : "INDEX(" + (fine ? "IecRes_class5_plain_ohm_per_km" : "IecRes_class2_plain_ohm_per_km")
                                     + ",MATCH(W_Size,IecRes_area_mm2,0)+" + steps + ")/1000";
-                    cab = "2*W_LengthM*(" + rr + "*((1+" + alpha + "*(W_CondTempC-20))/(1+" + alpha + "*(" + ref + "-20))))/W_Sets";
+                    cab = "2*W_LengthM*(" + rr + "*((1+" + alpha + "*(W_CondTempC-20))/(1+" + alpha + "*(" + ref + "-20))))/W_Sets+W_LeadsOhm";
                 } else if (fx instanceof SurgeFix.ShorterCable sc0) {
-                    cab = "W_SurgeCableOhm*" + (sc0.newLengthM() / sc0.presentLengthM());
+                    cab = "W_CableOhm*" + (sc0.newLengthM() / sc0.presentLengthM()) + "+W_LeadsOhm";
                 } else if (fx instanceof SurgeFix.SoftStarter) {
                     String x0 = "(W_SurgeAcW-" + directStartW + "*(1-W_SoftShare))";
                     String pp = "(" + x0 + "/InvRatedW)";
@@ -173,7 +180,7 @@ final class WiringSheet {
                 + bat.ref(bankRow, BatterySheet.STRINGS), sc.input().bankResistanceOhm(), "Ω", "", "0.000000", "W_BankOhmWarm");
         r = f(s, r, "At the battery terminals (where the battery's device sits)", "W_VocFull/W_BankOhmWarm", sc.atBatteryTerminalsA(), "A",
                 "V_oc ÷ R_bank", Styles.INT, "W_ScA");
-        r = f(s, r, "At the inverter end of the cable", "W_VocFull/(W_BankOhmWarm+W_SurgeCableOhm)", sc.atCableEndA(), "A", "", Styles.INT, null);
+        r = f(s, r, "At the inverter end of the cable", "W_VocFull/(W_BankOhmWarm+W_CableOhm)", sc.atCableEndA(), "A", "", Styles.INT, null);
         r = in(s, r, "What ordinary devices interrupt", ShortCircuit.COMMON_ORDINARY_DEVICE_LIMIT_A, "A", "common practice, no source",
                 Styles.INT, "W_OrdinaryLimitA");
         r = s.paragraph(r, 0, 3, "A device at the battery must be rated to interrupt this DC current; ordinary devices often interrupt no more than "
@@ -263,9 +270,10 @@ final class WiringSheet {
             r = f(s, r, "Current the corrected capacity must carry (Ib)", P + "DesignA", a.conditionsOfUseCurrentA(), "A",
                     "IEC 60364-5-52: Iz ≥ Ib", Styles.D1, P + "CouA");
         }
-        r = in(s, r, "One-way length", cable.request().oneWayLengthM(), "m", "project", Styles.D2, P + "LengthM");
-        r = in(s, r, "Voltage-drop limit", cable.request().maxVoltageDropPct(), "%", "project", Styles.D2, P + "DropLimitPct");
-        r = in(s, r, "Ambient around the conductors", cable.request().installation().ambientC(), "°C", "project", Styles.D1, P + "AmbientC");
+        String given = "project file, or its default (Inputs sheet)";
+        r = in(s, r, "One-way length", cable.request().oneWayLengthM(), "m", given, Styles.D2, P + "LengthM");
+        r = in(s, r, "Voltage-drop limit", cable.request().maxVoltageDropPct(), "%", given, Styles.D2, P + "DropLimitPct");
+        r = in(s, r, "Ambient around the conductors", cable.request().installation().ambientC(), "°C", given, Styles.D1, P + "AmbientC");
         r = in(s, r, "Current-carrying conductors together", cable.request().installation().currentCarryingConductors(), "",
                 "a two-wire DC circuit", Styles.INT, P + "Conductors");
         r = f(s, r, nominalLabel, nominalFormula, nominalV, "V", nominalHow, Styles.D1, P + "NominalV");

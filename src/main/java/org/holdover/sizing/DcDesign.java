@@ -26,11 +26,13 @@ import org.holdover.dc.SurgeResult;
  * @param surge            the operating point during the start (or collapse)
  * @param fixes            what each candidate fix would give, when the start fails
  * @param shortCircuit     prospective short-circuit current at full charge, 25 °C
+ * @param leads            each inverter's leads from the common bus bar (inverters in parallel), or null
+ * @param leadsOhm         the leads as the whole start current sees them: one lead's round trip ÷ units, Ω (0 without)
  */
 public record DcDesign(double cableCurrentA, ConductorSelection cable, double socFloor, double tempC, int cells,
                        double ocvCellV, double moduleOhm, double resistanceFactor, double bankOhm, double cableOhm,
                        double surgeInputW, double peakLimitA, SurgeResult surge, List<SurgeFixes.Evaluation> fixes,
-                       ShortCircuit.Result shortCircuit) {
+                       ShortCircuit.Result shortCircuit, InverterLeads leads, double leadsOhm) {
 
     public DcDesign {
         fixes = List.copyOf(fixes);

@@ -56,6 +56,11 @@ public final class DcSide {
                 bank.bankNominalV(), w.batteryToInverterM(), w.maxVoltageDropPct(), inst, MAX_CABLE_SETS, w.fineStranded());
         ConductorSelection cable = ConductorSizer.standard().size(req);
         double cableOhm = cable instanceof ConductorSelection.Sized s ? s.chosen().voltageDrop().roundTripResistanceOhm() : 0.0;
+        // Inverters in parallel: the battery cable runs to a bus bar and each unit draws its share through its own leads,
+        // so the start current sees one lead's resistance ÷ units in series with the cable.
+        InverterLeads leads = InverterLeads.size(in, inv, bank.bankNominalV());
+        double leadsOhm = leads != null && leads.lead() instanceof ConductorSelection.Sized ls
+                ? ls.chosen().voltageDrop().roundTripResistanceOhm() / leads.units() : 0.0;
 
         double floor = 1.0 - bank.requirement().depthOfDischarge();
         double tempC = bank.requirement().batteryTempC();
@@ -67,7 +72,7 @@ public final class DcSide {
         double surgeInW = inv.loss().inputW(motors ? f.surgeW() : f.runningPeakW());
         double perString = bank.requirement().surgeS() <= m.surgeS() ? m.maxSurgeA() : m.maxContinuousA();
         double peakLimit = perString * bank.strings();
-        SurgeInput input = new SurgeInput(cells * ocv, bankOhm, cableOhm, surgeInW, inv.dcMinV(), peakLimit);
+        SurgeInput input = new SurgeInput(cells * ocv, bankOhm, cableOhm + leadsOhm, surgeInW, inv.dcMinV(), peakLimit);
         SurgeResult surge = SurgeVoltage.solve(input);
 
         List<SurgeFixes.Evaluation> fixes = List.of();
@@ -80,10 +85,12 @@ public final class DcSide {
             }
             candidates.add(new SurgeFix.ParallelStrings(bank.strings(), 1));
             if (cable instanceof ConductorSelection.Sized s) {
-                candidates.addAll(SurgeFixes.heavierCables(ConductorTables.standard(), s.chosen().size(),
+                for (SurgeFix.HeavierCable h : SurgeFixes.heavierCables(ConductorTables.standard(), s.chosen().size(),
                         s.chosen().parallelSets(), w.batteryToInverterM(), s.chosen().voltageDrop().conductorTempC(),
-                        w.fineStranded(), 2));
-                candidates.add(new SurgeFix.ShorterCable(w.batteryToInverterM(), w.batteryToInverterM() / 2));
+                        w.fineStranded(), 2)) {
+                    candidates.add(h.withFixedOhm(leadsOhm));
+                }
+                candidates.add(new SurgeFix.ShorterCable(w.batteryToInverterM(), w.batteryToInverterM() / 2, leadsOhm));
             }
             double direct = 0;
             for (StartingMotor sm : la.starting()) {
@@ -103,7 +110,7 @@ public final class DcSide {
         ShortCircuit.Result sc = ShortCircuit.assess(new ShortCircuit.Input(fullOcv, warmOhm, cableOhm,
                 ShortCircuit.COMMON_ORDINARY_DEVICE_LIMIT_A, ShortCircuit.COMMON_ORDINARY_DEVICE_LIMIT_A));
         return new DcDesign(cableA, cable, floor, tempC, cells, ocv, m.internalResistanceOhm(), rFactor, bankOhm, cableOhm,
-                surgeInW, peakLimit, surge, fixes, sc);
+                surgeInW, peakLimit, surge, fixes, sc, leads, leadsOhm);
     }
 
     private static String fmt(double v) {

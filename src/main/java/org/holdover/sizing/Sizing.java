@@ -120,7 +120,7 @@ public final class Sizing {
         if (pvCircuits != null) {
             checks.addAll(pvCircuits.checks());
         }
-        InverterLeads leads = InverterLeads.size(in, inv.spec(), bank.bankNominalV());
+        InverterLeads leads = dc.leads();
         if (leads != null) {
             checks.addAll(leads.checks());
         }

@@ -575,8 +575,6 @@ public final class SystemSearch {
                     }
                     List<BankPart> banks = new ArrayList<>();
                     String last = "";
-                    InverterLeads leads = InverterLeads.size(in, spec, base.bankNominalV());
-                    List<Check> leadChecks = leads == null ? List.of() : leads.checks();
                     for (int p = base.strings(); p <= base.maxParallel(); p++) {
                         BankDesign d = base.withStrings(p);
                         checks++;
@@ -587,7 +585,9 @@ public final class SystemSearch {
                         }
                         List<Check> cs = new ArrayList<>(Sizing.bankChecks(d, spec, energy));
                         cs.addAll(Sizing.dcChecks(dc));
-                        cs.addAll(leadChecks);
+                        if (dc.leads() != null) {
+                            cs.addAll(dc.leads().checks());
+                        }
                         Check f = cs.stream().filter(x -> !x.passes()).findFirst().orElse(null);
                         if (f != null) {
                             last = failure(f);

@@ -40,6 +40,18 @@ class InverterLeadsTest {
         // Drop: 2 × 1.5 m × 0.154 Ω/kft ÷ 304.8 m/kft (NEC Chapter 9 Table 8, uncoated stranded, 75 °C) × I ÷ 51.2 V.
         double dropPct = 100 * 2 * 1.5 * 0.154 / 304.8 * amps / 51.2;
         assertThat(sized.chosen().voltageDrop().dropPct()).isCloseTo(dropPct, within(0.005));
+        // During the motor start each unit draws a third of the current through its own leads: the start current sees
+        // one lead's round trip ÷ 3 in series with the battery cable (2 × 1.5 m × 0.154 Ω/kft ÷ 304.8 ÷ 3 ≈ 0.505 mΩ).
+        DcDesign dc = r.chosen().banks().stream().filter(b -> b.design() == r.bank()).findFirst().orElseThrow().dc();
+        assertThat(dc.leads()).isSameAs(leads);
+        assertThat(dc.leadsOhm()).isCloseTo(2 * 1.5 * 0.154 / 304.8 / 3, within(2e-3 * dc.leadsOhm()));
+        // Power balance P = V·I, V = V_oc − I·R with R = bank + cable + leads ÷ 3: I = 2P ÷ (V_oc + √(V_oc² − 4PR)).
+        double rTotal = dc.bankOhm() + dc.cableOhm() + dc.leadsOhm();
+        double voc = dc.openCircuitV();
+        double i = 2 * dc.surgeInputW() / (voc + Math.sqrt(voc * voc - 4 * dc.surgeInputW() * rTotal));
+        var o = (org.holdover.dc.SurgeResult.Operating) dc.surge();
+        assertThat(o.currentA()).isCloseTo(i, within(1e-9 * i));
+        assertThat(o.inverterTerminalV()).isCloseTo(voc - i * rTotal, within(1e-9 * voc));
         // The checks are the pinned system's, and they pass.
         assertThat(r.checks()).filteredOn(c -> c.id().startsWith("lead.")).hasSize(3).allSatisfy(c -> assertThat(c.passes()).isTrue());
     }
@@ -50,5 +62,8 @@ class InverterLeadsTest {
         assertThat(r.inverter().spec().units()).isEqualTo(1);
         assertThat(r.inverterLeads()).isNull();
         assertThat(r.checks()).noneMatch(c -> c.id().startsWith("lead."));
+        DcDesign dc = r.chosen().banks().stream().filter(b -> b.design() == r.bank()).findFirst().orElseThrow().dc();
+        assertThat(dc.leads()).isNull();
+        assertThat(dc.leadsOhm()).isZero();
     }
 }
