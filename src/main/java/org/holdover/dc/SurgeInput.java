@@ -38,6 +38,11 @@ public record SurgeInput(double openCircuitV, double bankResistanceOhm, double c
         return bankResistanceOhm + cableRoundTripResistanceOhm;
     }
 
+    /** V_oc² − 4·P·R of the power balance P = V·I, V = V_oc − I·R: negative when the bank cannot deliver P. */
+    public double discriminant() {
+        return openCircuitV * openCircuitV - 4.0 * inverterInputW * totalResistanceOhm();
+    }
+
     /**
      * @param ohm cable round-trip resistance, Ω, ≥ 0
      * @return a copy with that cable resistance

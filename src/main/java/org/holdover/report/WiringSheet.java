@@ -104,7 +104,7 @@ final class WiringSheet {
                 + bat.ref(bankRow, BatterySheet.SURGE_S) + "," + bat.ref(bankRow, BatterySheet.SURGE) + "," + bat.ref(bankRow, BatterySheet.CONT) + ")",
                 dc.peakLimitA(), "A", "strings × module short-time limit", Styles.INT, "W_PeakLimitA");
         SurgeResult.Operating o = dc.surge() instanceof SurgeResult.Operating op ? op : null;
-        double disc = dc.openCircuitV() * dc.openCircuitV() - 4.0 * dc.surgeInputW() * (dc.bankOhm() + dc.cableOhm() + dc.leadsOhm());
+        double disc = dc.startDiscriminant();
         r = f(s, r, "Discriminant V_oc² − 4·P·R (negative: the bank cannot deliver the power)",
                 "W_Voc*W_Voc-4*W_SurgeDcW*(W_BankOhm+W_SurgeCableOhm)", disc, "V²", "power balance P = V·I with V = V_oc − I·R", Styles.D2, "W_Disc");
         r = f(s, r, "Current during the start", "IF(W_Disc<0,0,2*W_SurgeDcW/(W_Voc+SQRT(W_Disc)))", o == null ? 0 : o.currentA(), "A",
@@ -160,7 +160,7 @@ final class WiringSheet {
                 s.formula(r, 4, pw, e.after().inverterInputW(), Styles.INT);
                 s.formula(r, 5, cut, e.after().lowVoltageCutoffV(), Styles.D1);
                 s.formula(r, 6, lim, e.after().peakCurrentLimitA(), Styles.INT);
-                double d = e.after().openCircuitV() * e.after().openCircuitV() - 4.0 * e.after().inverterInputW() * e.after().totalResistanceOhm();
+                double d = e.after().discriminant();
                 s.formula(r, 7, "B" + R + "*B" + R + "-4*E" + R + "*(C" + R + "+D" + R + ")", d, Styles.D2);
                 SurgeResult.Operating eo = e.result() instanceof SurgeResult.Operating op2 ? op2 : null;
                 s.formula(r, 8, "IF(H" + R + "<0,0,2*E" + R + "/(B" + R + "+SQRT(H" + R + ")))", eo == null ? 0 : eo.currentA(), Styles.D1);

@@ -43,6 +43,11 @@ public record DcDesign(double cableCurrentA, ConductorSelection cable, double so
         return cells * ocvCellV;
     }
 
+    /** V_oc² − 4·P·R of the start, R = bank + battery cable + the inverters' leads: negative when the bank cannot deliver. */
+    public double startDiscriminant() {
+        return openCircuitV() * openCircuitV() - 4.0 * surgeInputW * (bankOhm + cableOhm + leadsOhm);
+    }
+
     /** A conductor was found for the battery–inverter circuit. */
     public boolean cableSized() {
         return cable instanceof ConductorSelection.Sized;
