@@ -108,34 +108,30 @@ public record SizingInput(String name, ProjectInput.Mode mode, double acVoltsRms
 
     /** The same input with other generator rules. */
     public SizingInput withGenerator(GeneratorRules g) {
-        return new SizingInput(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin,
-                maxBatteryCurrentA, maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours, autonomyDays,
-                loads, catalog, assumptions, warnings, notes, measuredW, profileScale, profileServed, wiring, maxUnmetFraction,
-                batteryDesignC, solar, g, maxInvertersInParallel);
+        return copy(catalog, wiring, g, maxInvertersInParallel);
     }
 
     /** The same input with another catalog. */
     public SizingInput withCatalog(Catalog c) {
-        return new SizingInput(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin,
-                maxBatteryCurrentA, maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours, autonomyDays,
-                loads, c, assumptions, warnings, notes, measuredW, profileScale, profileServed, wiring, maxUnmetFraction,
-                batteryDesignC, solar, generator, maxInvertersInParallel);
+        return copy(c, wiring, generator, maxInvertersInParallel);
     }
 
     /** The same input with other cable runs and conductor rules. */
     public SizingInput withWiring(WiringRules w) {
-        return new SizingInput(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin,
-                maxBatteryCurrentA, maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours, autonomyDays,
-                loads, catalog, assumptions, warnings, notes, measuredW, profileScale, profileServed, w, maxUnmetFraction,
-                batteryDesignC, solar, generator, maxInvertersInParallel);
+        return copy(catalog, w, generator, maxInvertersInParallel);
     }
 
     /** The same input with another cap on inverters in parallel. */
     public SizingInput withMaxInvertersInParallel(int n) {
+        return copy(catalog, wiring, generator, n);
+    }
+
+    /** The one copy the withers share: everything else as it is. */
+    private SizingInput copy(Catalog c, WiringRules w, GeneratorRules g, int inverters) {
         return new SizingInput(name, mode, acVoltsRms, frequencyHz, splitPhase, inverterAmbientC, batteryColdestC, inverterMargin,
                 maxBatteryCurrentA, maxParallelRule, chemistry, depthOfDischarge, endOfLife, location, outageHours, autonomyDays,
-                loads, catalog, assumptions, warnings, notes, measuredW, profileScale, profileServed, wiring, maxUnmetFraction,
-                batteryDesignC, solar, generator, n);
+                loads, c, assumptions, warnings, notes, measuredW, profileScale, profileServed, w, maxUnmetFraction,
+                batteryDesignC, solar, g, inverters);
     }
 
     /** Unit counts to try for a catalog inverter: 1 to the smaller of its own limit and the project's. */
